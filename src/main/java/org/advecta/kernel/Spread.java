@@ -1,0 +1,100 @@
+package org.advecta.kernel;
+
+import org.advecta.internal.ScaledExp;
+
+/**
+ * The spread of a drifting Gaussian along one axis at one time t &gt; 0: the exponent factor
+ * R/(4 D t), held as an unevaluated double-double sum so that ξ²·R/(4Dt) carries no more
+ * than a few units of rounding whatever its size, and the normalisation √(R/(4π D t)).
+ *
+ * <p>Why double-double: the kernel's relative error from a relative error δ in its exponent
+ * q = ξ²R/(4Dt) is q·δ, and q reaches 745 before the kernel underflows. A plainly rounded
+ * q (four roundings) costs up to 4q/2 ≈ 1500 ULP there; the split keeps it to about q·2⁻¹⁰⁰.
+ */
+final class Spread {
+
+    /** Leading part of R/(4 D t). */
+    final double high;
+    /** Trailing part of R/(4 D t). */
+    final double low;
+    /** √(R/(4π D t)), the one-axis normalisation. */
+    final double norm;
+    /**
+     * True when 4Dt/R is below {@link #COLLAPSE} = 2⁻⁶⁰⁰ ≈ 2.4e-181: the spread is then far
+     * below any length a double near the centre can resolve, and the kernel takes its t → 0
+     * limit. The threshold keeps the product of three normalisations (each at most
+     * 2³⁰⁰/√π) finite.
+     */
+    final boolean collapsed;
+
+    /** The smallest 4Dt/R the kernels resolve; see {@link #collapsed}. */
+    static final double COLLAPSE = 0x1.0p-600;
+
+    Spread(double d, double r, double t) {
+        // 4Dt exactly as p + pLow (scaling by 4 is exact), then R/(p + pLow) in double-double.
+        final double fourD = 4 * d;
+        final double p = fourD * t;
+        final double pLow = Math.fma(fourD, t, -p);
+        final double h = r / p;
+        final double rem = Math.fma(-h, p, r);
+        this.collapsed = !(p / r >= COLLAPSE);
+        this.high = h;
+        this.low = (rem - h * pLow) / p;
+        this.norm = Math.sqrt(h / Math.PI);
+    }
+
+    /**
+     * Returns the leading part of ξ²·R/(4Dt).
+     *
+     * @param xi the distance from the centre
+     * @return the leading part
+     */
+    double exponentHigh(double xi) {
+        return xi * xi * high;
+    }
+
+    /**
+     * Returns the trailing part of ξ²·R/(4Dt), given the leading part.
+     *
+     * @param xi the distance from the centre
+     * @param qHigh the value of {@link #exponentHigh(double)} for the same ξ
+     * @return the trailing part
+     */
+    double exponentLow(double xi, double qHigh) {
+        final double p = xi * xi;
+        final double pLow = Math.fma(xi, xi, -p);
+        return Math.fma(p, high, -qHigh) + (p * low + pLow * high);
+    }
+
+    /**
+     * Returns m·exp(s − qx − qy) with qx = ξ²R/(4D_x t), qy = η²R/(4D_y t), the exponent
+     * summed in double-double.
+     */
+    static double gaussian(double m, double s, Spread sx, double xi, Spread sy, double eta) {
+        final double hx = sx.exponentHigh(xi);
+        final double hy = sy.exponentHigh(eta);
+        final double h = hx + hy;
+        final double bv = h - hx;
+        final double err = (hx - (h - bv)) + (hy - bv);
+        return ScaledExp.valueOfSplit(m, s, h,
+            err + sx.exponentLow(xi, hx) + sy.exponentLow(eta, hy));
+    }
+
+    /**
+     * Returns m·exp(s − qx − qy − qz), the exponent summed in double-double.
+     */
+    static double gaussian(double m, double s, Spread sx, double xi, Spread sy, double eta,
+                           Spread sz, double zeta) {
+        final double hx = sx.exponentHigh(xi);
+        final double hy = sy.exponentHigh(eta);
+        final double hz = sz.exponentHigh(zeta);
+        final double h1 = hx + hy;
+        double bv = h1 - hx;
+        double err = (hx - (h1 - bv)) + (hy - bv);
+        final double h = h1 + hz;
+        bv = h - h1;
+        err += (h1 - (h - bv)) + (hz - bv);
+        return ScaledExp.valueOfSplit(m, s, h, err + sx.exponentLow(xi, hx)
+            + sy.exponentLow(eta, hy) + sz.exponentLow(zeta, hz));
+    }
+}
