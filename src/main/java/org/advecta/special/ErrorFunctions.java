@@ -17,8 +17,9 @@ public final class ErrorFunctions {
 
     /**
      * Where {@link #logErfc(double)} switches from log1p(−erf x) to −x² + log(erfcx x):
-     * at |x| ≤ 1/2 erfc is within a factor 2 of 1, so log1p loses nothing; beyond it the
-     * scaled form avoids the underflow of erfc (erfc x = 0 in double for x &gt; 27.3).
+     * below it 1 − erf x lies in [0.47, 2], where log1p of the exactly negated erf loses
+     * nothing (log of a rounded erfc near 1.5 would triple its error: 1/ln 1.5 ≈ 2.5);
+     * above it the scaled form avoids the underflow of erfc (erfc x = 0 for x &gt; 27.3).
      */
     private static final double LOG_ERFC_SWITCH = 0.5;
 
@@ -100,13 +101,13 @@ public final class ErrorFunctions {
      * itself underflows to 0.
      *
      * <pre>
-     * log erfc(x) = log1p(−erf x)           |x| ≤ 1/2
+     * log erfc(x) = log1p(−erf x)           x ≤ 1/2
      *             = −x² + log(erfcx x)      x &gt; 1/2
-     *             = log(erfc x)             x &lt; −1/2   (erfc x in (1.47, 2])
      * </pre>
      *
-     * <p>Special cases: logErfc(−∞) = ln 2; logErfc(+∞) = −∞; logErfc(NaN) = NaN; −∞ also
-     * for x above about 1.34e154, where −x² itself is below −{@link Double#MAX_VALUE}.
+     * <p>Special cases: logErfc(−∞) = ln 2; logErfc(+∞) = −∞; logErfc(NaN) = NaN;
+     * logErfc(±0) = ∓0.0 (the exact result 0, as a signed zero); −∞ also for x above about 1.34e154, where −x² itself is below
+     * −{@link Double#MAX_VALUE}.
      *
      * <p>Accuracy: within 4 ULP of the exact result for |x| ≥ 1/2 and within max(4, 2κ) ULP
      * for |x| &lt; 1/2, where κ = |x·erfc′(x)/(erfc(x)·log erfc(x))| (large only near
@@ -120,9 +121,7 @@ public final class ErrorFunctions {
             // erfc x = exp(−x²)·erfcx x, and both terms are negative: no cancellation.
             return -x * x + Math.log(Erfcx.value(x));
         }
-        if (x >= -LOG_ERFC_SWITCH) {
-            return Math.log1p(-Erf.value(x));
-        }
-        return Math.log(Erfc.value(x));
+        // NaN falls through to here and gives NaN
+        return Math.log1p(-Erf.value(x));
     }
 }

@@ -19,8 +19,8 @@ public final class Exponentials {
     /**
      * Returns exp(−x²).
      *
-     * <p>Special cases: exp(−(±∞)²) = 0; NaN gives NaN; the result is 1 for |x| below
-     * about 1.05e-8 and 0 for |x| above about 27.3.
+     * <p>Special cases: exp(−(±∞)²) = 0; NaN gives NaN; the result is 1 for |x| ≤ 2⁻²⁷
+     * ≈ 7.45e-9 (where x² ≤ 2⁻⁵⁴ and exp(−x²) rounds to 1) and 0 for |x| above about 27.3.
      *
      * <p>Accuracy: within 2 ULP of the exact result wherever it is a normal double, within
      * 1 {@link Double#MIN_VALUE} where it is subnormal. (The inherent sensitivity to x is
