@@ -147,7 +147,7 @@ class SpecialCasesTest {
 
     /**
      * logErfc switches formula at x = 1/2. Consecutive doubles across it must not jump by more
-     * than the accuracy of either branch. (Monotonicity is asserted only between points 128
+     * than the two branches' stated accuracies together (4 + 4 ULP). (Monotonicity is asserted only between points 128
      * ulp apart: the underlying erf of Commons Numbers is not semi-monotone at the ulp level,
      * and we do not claim that logErfc is.)
      */
@@ -161,7 +161,7 @@ class SpecialCasesTest {
         for (int i = 0; i < 256; i++) {
             x = Math.nextUp(x);
             final double value = ErrorFunctions.logErfc(x);
-            assertEquals(previous, value, 4 * Math.ulp(value), "jump at " + x);
+            assertEquals(previous, value, 8 * Math.ulp(value), "jump at " + x);
             previous = value;
         }
         assertTrue(x > edge, "the sweep crossed " + edge);
