@@ -1,6 +1,7 @@
 package org.advecta.kernel;
 
 import org.advecta.internal.Checks;
+import org.advecta.internal.Spread;
 import org.advecta.internal.ScaledExp;
 import org.advecta.transport.TransportParameters;
 
@@ -32,7 +33,7 @@ import org.advecta.transport.TransportParameters;
  * condition number with respect to x, t, x₀, v, D, R and μ; far tails underflow to 0 only
  * where the exact value is below half of {@link Double#MIN_VALUE}, and subnormal results are
  * within a few {@link Double#MIN_VALUE}. The exponent is carried in double-double precision
- * (see {@link Spread}).
+ * (see the internal Spread class).
  *
  * <p><b>Arrays.</b> The batch methods read {@code x[i]} before writing {@code out[i]}, so
  * {@code out} may be the same array as {@code x}; no other array is modified, and nothing is

@@ -1,6 +1,7 @@
 package org.advecta.kernel;
 
 import org.advecta.internal.Checks;
+import org.advecta.internal.Spread;
 import org.advecta.transport.TransportParameters;
 
 /**

@@ -13,7 +13,16 @@ import org.advecta.internal.Checks;
  * </pre>
  * with c the concentration in the mobile (dissolved) phase, v the velocity (any sign),
  * D &gt; 0 the dispersion coefficient, R ≥ 1 the retardation factor and μ ≥ 0 the
- * first-order decay rate acting on the dissolved phase only. In two and three dimensions
+ * first-order decay rate of the equation.
+ *
+ * <p><b>Decay convention.</b> Sources differ on whether decay acts on the dissolved phase
+ * only or on the dissolved and sorbed phases alike. The library's μ is the coefficient of
+ * the term −μc above. {@link #withDecay(double)} sets it directly (decay of the dissolved
+ * phase only, rate μ); {@link #withDecayOnBothPhases(double)} takes the rate k of a decay
+ * that acts on both phases alike, which enters the equation as μ = k·R: the decay term
+ * θμ_l c + ρ_b μ_s K_d c divided by θ is (μ_l + μ_s (R − 1)) c, which is k·R·c when
+ * μ_l = μ_s = k (van Genuchten &amp; Alves 1982, USDA Tech. Bull. 1661, combine the two rates
+ * the same way). In two and three dimensions
  * the dispersion tensor is diagonal: D_L along the flow (x), D_T across it (y) and D_V
  * across it in the third direction (z); {@link #of(double, double)} sets all three equal.
  *
@@ -36,15 +45,22 @@ public final class TransportParameters {
     private final double vertical;
     private final double retardation;
     private final double decay;
+    /** True when {@link #decay} is the rate k of both phases (μ = kR), false when it is μ. */
+    private final boolean bothPhases;
 
     private TransportParameters(double velocity, double longitudinal, double transverse,
-                                double vertical, double retardation, double decay) {
+                                double vertical, double retardation, double decay,
+                                boolean bothPhases) {
         this.velocity = velocity;
         this.longitudinal = longitudinal;
         this.transverse = transverse;
         this.vertical = vertical;
         this.retardation = retardation;
         this.decay = decay;
+        this.bothPhases = bothPhases;
+        if (!(decayRate() < Double.POSITIVE_INFINITY)) {
+            throw Checks.fail("mu", decayRate(), "k·R must be finite");
+        }
     }
 
     /**
@@ -59,7 +75,7 @@ public final class TransportParameters {
     public static TransportParameters of(double v, double d) {
         Checks.finite("v", v);
         Checks.positive("D", d);
-        return new TransportParameters(v, d, d, d, 1.0, 0.0);
+        return new TransportParameters(v, d, d, d, 1.0, 0.0, false);
     }
 
     /**
@@ -71,7 +87,8 @@ public final class TransportParameters {
      */
     public TransportParameters withRetardation(double r) {
         Checks.atLeast("R", r, 1.0);
-        return new TransportParameters(velocity, longitudinal, transverse, vertical, r, decay);
+        return new TransportParameters(velocity, longitudinal, transverse, vertical, r, decay,
+            bothPhases);
     }
 
     /**
@@ -86,7 +103,23 @@ public final class TransportParameters {
     public TransportParameters withDecay(double mu) {
         Checks.nonNegative("mu", mu);
         return new TransportParameters(velocity, longitudinal, transverse, vertical,
-            retardation, mu);
+            retardation, mu, false);
+    }
+
+    /**
+     * Returns a copy with a first-order decay of rate k that acts on the dissolved and the
+     * sorbed phase alike (as radioactive decay does). In the library's equation this is
+     * μ = k·R, and μ follows R if the retardation is changed afterwards. The dissolved
+     * concentration of a released mass then decays as exp(−kt).
+     *
+     * @param k decay rate of both phases, finite and ≥ 0
+     * @return the new parameters
+     * @throws IllegalArgumentException if k is not finite or negative
+     */
+    public TransportParameters withDecayOnBothPhases(double k) {
+        Checks.nonNegative("k", k);
+        return new TransportParameters(velocity, longitudinal, transverse, vertical,
+            retardation, k, true);
     }
 
     /**
@@ -103,7 +136,7 @@ public final class TransportParameters {
         Checks.positive("DL", dL);
         Checks.positive("DT", dT);
         Checks.positive("DV", dV);
-        return new TransportParameters(velocity, dL, dT, dV, retardation, decay);
+        return new TransportParameters(velocity, dL, dT, dV, retardation, decay, bothPhases);
     }
 
     /**
@@ -153,12 +186,23 @@ public final class TransportParameters {
     }
 
     /**
-     * Returns the first-order decay rate μ of the dissolved phase.
+     * Returns the decay coefficient μ of the equation (the term −μc): the value given to
+     * {@link #withDecay(double)}, or k·R after {@link #withDecayOnBothPhases(double)}.
      *
-     * @return μ ≥ 0
+     * @return μ ≥ 0 (+∞ only if k·R overflows)
      */
     public double decayRate() {
-        return decay;
+        return bothPhases ? decay * retardation : decay;
+    }
+
+    /**
+     * Returns true when the decay was given as a rate acting on both phases
+     * ({@link #withDecayOnBothPhases(double)}).
+     *
+     * @return whether μ = k·R
+     */
+    public boolean isDecayOnBothPhases() {
+        return bothPhases;
     }
 
     /**
@@ -199,7 +243,7 @@ public final class TransportParameters {
         if (decay == 0) {
             return 0.0;
         }
-        return decay * length / Math.abs(velocity);
+        return decayRate() * length / Math.abs(velocity);
     }
 
     @Override
@@ -216,7 +260,8 @@ public final class TransportParameters {
             && Double.compare(transverse, o.transverse) == 0
             && Double.compare(vertical, o.vertical) == 0
             && Double.compare(retardation, o.retardation) == 0
-            && Double.compare(decay, o.decay) == 0;
+            && Double.compare(decay, o.decay) == 0
+            && bothPhases == o.bothPhases;
     }
 
     @Override
@@ -226,13 +271,15 @@ public final class TransportParameters {
         h = 31 * h + Double.hashCode(transverse);
         h = 31 * h + Double.hashCode(vertical);
         h = 31 * h + Double.hashCode(retardation);
-        return 31 * h + Double.hashCode(decay);
+        h = 31 * h + Double.hashCode(decay);
+        return 31 * h + Boolean.hashCode(bothPhases);
     }
 
     @Override
     public String toString() {
         return String.format(Locale.ROOT,
-            "TransportParameters[v=%s, DL=%s, DT=%s, DV=%s, R=%s, mu=%s]",
-            velocity, longitudinal, transverse, vertical, retardation, decay);
+            "TransportParameters[v=%s, DL=%s, DT=%s, DV=%s, R=%s, mu=%s%s]",
+            velocity, longitudinal, transverse, vertical, retardation, decayRate(),
+            bothPhases ? " (k=" + decay + " on both phases)" : "");
     }
 }

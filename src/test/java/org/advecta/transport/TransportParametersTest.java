@@ -36,6 +36,21 @@ class TransportParametersTest {
     }
 
     @Test
+    void decayOnBothPhasesEntersTheEquationAsKTimesR() {
+        final TransportParameters p = BASE.withRetardation(3).withDecayOnBothPhases(0.2);
+        assertEquals(0.2 * 3, p.decayRate(), 1e-16);
+        assertTrue(p.isDecayOnBothPhases());
+        // μ follows R when R is changed afterwards
+        assertEquals(0.2 * 5, p.withRetardation(5).decayRate(), 1e-16);
+        // the dissolved-phase convention does not
+        assertEquals(0.2, BASE.withDecay(0.2).withRetardation(5).decayRate());
+        assertNotEquals(BASE.withDecay(0.2), BASE.withDecayOnBothPhases(0.2));
+        assertEquals(BASE.withDecay(0.2), BASE.withDecayOnBothPhases(0.2).withDecay(0.2));
+        assertRejected("k", () -> BASE.withDecayOnBothPhases(-1));
+        assertRejected("mu", () -> BASE.withRetardation(1e300).withDecayOnBothPhases(1e10));
+    }
+
+    @Test
     void anisotropicDispersion() {
         final TransportParameters p = BASE.withDispersion(1, 0.1, 0.01);
         assertEquals(1, p.dispersion());

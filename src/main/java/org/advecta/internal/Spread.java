@@ -1,36 +1,43 @@
-package org.advecta.kernel;
-
-import org.advecta.internal.ScaledExp;
+package org.advecta.internal;
 
 /**
  * The spread of a drifting Gaussian along one axis at one time t &gt; 0: the exponent factor
  * R/(4 D t), held as an unevaluated double-double sum so that ξ²·R/(4Dt) carries no more
  * than a few units of rounding whatever its size, and the normalisation √(R/(4π D t)).
  *
+ * <p>Not exported from the module.
+ *
  * <p>Why double-double: the kernel's relative error from a relative error δ in its exponent
  * q = ξ²R/(4Dt) is q·δ, and q reaches 745 before the kernel underflows. A plainly rounded
  * q (four roundings) costs up to 4q/2 ≈ 1500 ULP there; the split keeps it to about q·2⁻¹⁰⁰.
  */
-final class Spread {
+public final class Spread {
 
     /** Leading part of R/(4 D t). */
-    final double high;
+    public final double high;
     /** Trailing part of R/(4 D t). */
-    final double low;
+    public final double low;
     /** √(R/(4π D t)), the one-axis normalisation. */
-    final double norm;
+    public final double norm;
     /**
      * True when 4Dt/R is below {@link #COLLAPSE} = 2⁻⁶⁰⁰ ≈ 2.4e-181: the spread is then far
      * below any length a double near the centre can resolve, and the kernel takes its t → 0
      * limit. The threshold keeps the product of three normalisations (each at most
      * 2³⁰⁰/√π) finite.
      */
-    final boolean collapsed;
+    public final boolean collapsed;
 
     /** The smallest 4Dt/R the kernels resolve; see {@link #collapsed}. */
-    static final double COLLAPSE = 0x1.0p-600;
+    public static final double COLLAPSE = 0x1.0p-600;
 
-    Spread(double d, double r, double t) {
+    /**
+     * Returns the spread of a kernel with dispersion d and retardation r at time t.
+     *
+     * @param d dispersion coefficient, &gt; 0
+     * @param r retardation factor, ≥ 1
+     * @param t time, &gt; 0
+     */
+    public Spread(double d, double r, double t) {
         // 4Dt exactly as p + pLow (scaling by 4 is exact), then R/(p + pLow) in double-double.
         final double fourD = 4 * d;
         final double p = fourD * t;
@@ -49,7 +56,7 @@ final class Spread {
      * @param xi the distance from the centre
      * @return the leading part
      */
-    double exponentHigh(double xi) {
+    public double exponentHigh(double xi) {
         return xi * xi * high;
     }
 
@@ -60,7 +67,7 @@ final class Spread {
      * @param qHigh the value of {@link #exponentHigh(double)} for the same ξ
      * @return the trailing part
      */
-    double exponentLow(double xi, double qHigh) {
+    public double exponentLow(double xi, double qHigh) {
         final double p = xi * xi;
         final double pLow = Math.fma(xi, xi, -p);
         return Math.fma(p, high, -qHigh) + (p * low + pLow * high);
@@ -69,8 +76,16 @@ final class Spread {
     /**
      * Returns m·exp(s − qx − qy) with qx = ξ²R/(4D_x t), qy = η²R/(4D_y t), the exponent
      * summed in double-double.
+     *
+     * @param m finite multiplier
+     * @param s finite shift
+     * @param sx spread along x
+     * @param xi distance from the centre along x
+     * @param sy spread along y
+     * @param eta distance from the centre along y
+     * @return the product
      */
-    static double gaussian(double m, double s, Spread sx, double xi, Spread sy, double eta) {
+    public static double gaussian(double m, double s, Spread sx, double xi, Spread sy, double eta) {
         final double hx = sx.exponentHigh(xi);
         final double hy = sy.exponentHigh(eta);
         final double h = hx + hy;
@@ -82,8 +97,18 @@ final class Spread {
 
     /**
      * Returns m·exp(s − qx − qy − qz), the exponent summed in double-double.
+     *
+     * @param m finite multiplier
+     * @param s finite shift
+     * @param sx spread along x
+     * @param xi distance from the centre along x
+     * @param sy spread along y
+     * @param eta distance from the centre along y
+     * @param sz spread along z
+     * @param zeta distance from the centre along z
+     * @return the product
      */
-    static double gaussian(double m, double s, Spread sx, double xi, Spread sy, double eta,
+    public static double gaussian(double m, double s, Spread sx, double xi, Spread sy, double eta,
                            Spread sz, double zeta) {
         final double hx = sx.exponentHigh(xi);
         final double hy = sy.exponentHigh(eta);
