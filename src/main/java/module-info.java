@@ -13,4 +13,5 @@ module org.advecta {
     exports org.advecta.special;
     exports org.advecta.transport;
     exports org.advecta.kernel;
+    exports org.advecta.solution;
 }

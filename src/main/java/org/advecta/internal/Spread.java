@@ -36,18 +36,64 @@ public final class Spread {
      * @param d dispersion coefficient, &gt; 0
      * @param r retardation factor, ≥ 1
      * @param t time, &gt; 0
+     * @return the spread
      */
-    public Spread(double d, double r, double t) {
+    public static Spread of(double d, double r, double t) {
         // 4Dt exactly as p + pLow (scaling by 4 is exact), then R/(p + pLow) in double-double.
         final double fourD = 4 * d;
         final double p = fourD * t;
-        final double pLow = Math.fma(fourD, t, -p);
+        return new Spread(p, Math.fma(fourD, t, -p), r);
+    }
+
+    /**
+     * Returns the spread whose "4Dt/R" (twice the variance) is the double-double
+     * (twiceVariance + twiceVarianceLow), for kernels whose variance is not 2Dt/R (an initial
+     * Gaussian of width s₀ has 2s₀² + 4Dt/R).
+     *
+     * @param twiceVariance leading part, &gt; 0
+     * @param twiceVarianceLow trailing part
+     * @return the spread
+     */
+    public static Spread ofTwiceVariance(double twiceVariance, double twiceVarianceLow) {
+        return new Spread(twiceVariance, twiceVarianceLow, 1.0);
+    }
+
+    /** R/(p + pLow) in double-double. */
+    private Spread(double p, double pLow, double r) {
         final double h = r / p;
         final double rem = Math.fma(-h, p, r);
         this.collapsed = !(p / r >= COLLAPSE);
         this.high = h;
         this.low = (rem - h * pLow) / p;
         this.norm = Math.sqrt(h / Math.PI);
+        // √(high + low) = √(R/(4Dt)) = 1/L in double-double, for scaled distances ξ/L
+        final double s = Math.sqrt(h);
+        this.inverseLength = s;
+        this.inverseLengthLow = (Math.fma(-s, s, h) + this.low) / (2 * s);
+    }
+
+    /** Leading part of √(R/(4Dt)) = 1/L. */
+    private final double inverseLength;
+    /** Trailing part of 1/L. */
+    private final double inverseLengthLow;
+
+    /**
+     * Returns ξ/L = ξ·√(R/(4Dt)) rounded once (the length carried in double-double).
+     *
+     * @param xi a distance
+     * @return the scaled distance
+     */
+    public double scaled(double xi) {
+        return Math.fma(xi, inverseLength, xi * inverseLengthLow);
+    }
+
+    /**
+     * Returns 1/L = √(R/(4Dt)), rounded.
+     *
+     * @return the inverse length
+     */
+    public double inverseLength() {
+        return inverseLength;
     }
 
     /**

@@ -219,7 +219,7 @@ public final class FreeSpaceKernel1D {
     /** Returns the spread at t, or null at t = 0; validates t. */
     private Spread spread(double t) {
         Checks.nonNegative("t", t);
-        return t == 0 ? null : new Spread(dispersion, retardation, t);
+        return t == 0 ? null : Spread.of(dispersion, retardation, t);
     }
 
     private double centre(double t) {

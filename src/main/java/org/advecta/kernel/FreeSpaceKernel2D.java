@@ -235,8 +235,8 @@ public final class FreeSpaceKernel2D {
                 this.limit = true;
                 this.norm = 0;
             } else {
-                this.sx = new Spread(dL, retardation, t);
-                this.sy = new Spread(dT, retardation, t);
+                this.sx = Spread.of(dL, retardation, t);
+                this.sy = Spread.of(dT, retardation, t);
                 this.limit = sx.collapsed || sy.collapsed;
                 this.norm = sx.norm * sy.norm;
             }

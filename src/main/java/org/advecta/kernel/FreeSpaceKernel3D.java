@@ -293,8 +293,8 @@ public final class FreeSpaceKernel3D {
                 this.limit = true;
                 this.norm = 0;
             } else {
-                this.spreads = new Spread[] {new Spread(dL, retardation, t),
-                    new Spread(dT, retardation, t), new Spread(dV, retardation, t)};
+                this.spreads = new Spread[] {Spread.of(dL, retardation, t),
+                    Spread.of(dT, retardation, t), Spread.of(dV, retardation, t)};
                 this.limit = spreads[0].collapsed || spreads[1].collapsed
                     || spreads[2].collapsed;
                 this.norm = spreads[0].norm * spreads[1].norm * spreads[2].norm;

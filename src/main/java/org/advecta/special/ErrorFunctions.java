@@ -97,6 +97,102 @@ public final class ErrorFunctions {
     }
 
     /**
+     * The difference erf(m + h) − erf(m − h) over an interval given by its centre m and
+     * half-width h ≥ 0, accurate also when the interval is so narrow that erf(m ± h) agree
+     * in most of their digits (m ± h would then be rounded before erf sees them).
+     *
+     * <pre>
+     * erf(m + h) − erf(m − h) = (2/√π) ∫ exp(−s²) ds over [m − h, m + h]
+     * </pre>
+     *
+     * <p>Narrow intervals (h &lt; 1/2 and 4|m|h &lt; 1, so that exp(−s²) changes by less than a
+     * factor e across them) use the 10-point Gauss–Legendre rule on the integral, exact to
+     * 1e-16 relative there (Abramowitz &amp; Stegun 25.4.29; nodes checked against mpmath);
+     * wider ones use {@link #erfDifference(double, double)}, which then cannot cancel.
+     *
+     * <p>Special cases: NaN if m or h is NaN or h &lt; 0; 0 for h = 0; erf(±∞)
+     * differences for infinite h.
+     *
+     * <p>Accuracy: within max(16, 2κ) ULP of the exact result wherever it is a normal double,
+     * κ being its condition number with respect to m and h.
+     *
+     * @param m the centre of the interval
+     * @param h the half-width, ≥ 0
+     * @return erf(m + h) − erf(m − h)
+     */
+    public static double erfDifferenceCentred(double m, double h) {
+        if (!(h >= 0)) {
+            return Double.NaN;
+        }
+        if (h < NARROW_HALF_WIDTH && 4 * Math.abs(m) * h < 1) {
+            return narrowErfDifference(m, h);
+        }
+        return ErfDifference.value(m - h, m + h);
+    }
+
+    /**
+     * The derivative of the scaled complementary error function,
+     * erfcx′(x) = 2x·erfcx(x) − 2/√π, accurate also for large x where the two terms agree in
+     * most of their digits (erfcx′(x) ≈ −1/(√π x²)).
+     *
+     * <p>For x ≥ 3/2 it is evaluated from Laplace's continued fraction for erfcx, whose
+     * tails give the derivative without cancellation; below, the direct formula loses at
+     * most a factor 7 to cancellation.
+     *
+     * <p>Special cases: NaN gives NaN; erfcxDerivative(+∞) = −0.0; −∞ for x below about
+     * −26.6, where erfcx overflows.
+     *
+     * <p>Accuracy: within 16 ULP of the exact result wherever it is a normal double.
+     *
+     * @param x the argument
+     * @return erfcx′(x) (negative for every x)
+     */
+    public static double erfcxDerivative(double x) {
+        return -2 * ErfcxDerivatives.phi(x);
+    }
+
+    /**
+     * The second derivative of the scaled complementary error function,
+     * erfcx″(x) = 2(1 + 2x²)·erfcx(x) − 4x/√π, accurate also for large x where the terms
+     * agree in most of their digits (erfcx″(x) ≈ 2/(√π x³)).
+     *
+     * <p>For x ≥ 3/4 it is evaluated from Laplace's continued fraction for erfcx; below, the
+     * direct formula loses at most a factor 5 to cancellation.
+     *
+     * <p>Special cases: NaN gives NaN; erfcxSecondDerivative(+∞) = 0; +∞ for x below about
+     * −26.6, where erfcx overflows.
+     *
+     * <p>Accuracy: within 16 ULP of the exact result wherever it is a normal double.
+     *
+     * @param x the argument
+     * @return erfcx″(x) (positive for every x)
+     */
+    public static double erfcxSecondDerivative(double x) {
+        return 2 * ErfcxDerivatives.psi(x);
+    }
+
+    /** Half-widths below this may use the quadrature of {@link #erfDifferenceCentred}. */
+    private static final double NARROW_HALF_WIDTH = 0.5;
+    /** Positive nodes of the 10-point Gauss–Legendre rule on [−1, 1]. */
+    private static final double[] GL_NODES = {0.14887433898163122, 0.4333953941292472,
+        0.6794095682990244, 0.8650633666889845, 0.9739065285171717};
+    /** Their weights. */
+    private static final double[] GL_WEIGHTS = {0.29552422471475287, 0.26926671930999635,
+        0.21908636251598204, 0.1494513491505806, 0.06667134430868814};
+    /** 2/√π. */
+    private static final double TWO_OVER_SQRT_PI = 1.1283791670955126;
+
+    private static double narrowErfDifference(double m, double h) {
+        double sum = 0;
+        for (int i = GL_NODES.length - 1; i >= 0; i--) {
+            final double d = h * GL_NODES[i];
+            sum += GL_WEIGHTS[i] * (Exponentials.expMinusSquare(m + d)
+                + Exponentials.expMinusSquare(m - d));
+        }
+        return TWO_OVER_SQRT_PI * h * sum;
+    }
+
+    /**
      * The natural logarithm of erfc(x), finite for every finite x, including where erfc(x)
      * itself underflows to 0.
      *

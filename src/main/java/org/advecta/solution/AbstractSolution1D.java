@@ -1,0 +1,105 @@
+package org.advecta.solution;
+
+import org.advecta.internal.Checks;
+import org.advecta.transport.TransportParameters;
+
+/**
+ * Validation and the t = 0 split shared by the closed-form families: subclasses implement the
+ * solution for t &gt; 0 and their initial data for t = 0, on already-validated arguments.
+ */
+abstract class AbstractSolution1D implements Solution1D {
+
+    /** The transport parameters. */
+    final TransportParameters parameters;
+    /** v. */
+    final double velocity;
+    /** D (longitudinal). */
+    final double dispersion;
+    /** R. */
+    final double retardation;
+    /** μ/R, the decay rate of the dissolved concentration of a released mass. */
+    final double decayPerRetardation;
+    private final Domain domain;
+
+    AbstractSolution1D(TransportParameters parameters, Domain domain) {
+        if (parameters == null) {
+            throw new IllegalArgumentException("parameters: must not be null");
+        }
+        this.parameters = parameters;
+        this.velocity = parameters.velocity();
+        this.dispersion = parameters.dispersion();
+        this.retardation = parameters.retardation();
+        this.decayPerRetardation = parameters.decayRate() / parameters.retardation();
+        this.domain = domain;
+    }
+
+    @Override
+    public final TransportParameters parameters() {
+        return parameters;
+    }
+
+    @Override
+    public final Domain domain() {
+        return domain;
+    }
+
+    @Override
+    public final double value(double x, double t) {
+        checkPoint(x, t);
+        return t == 0 ? initialValue(x) : valueAt(x, t);
+    }
+
+    @Override
+    public final double gradient(double x, double t) {
+        checkPoint(x, t);
+        return t == 0 ? initialGradient(x) : gradientAt(x, t);
+    }
+
+    /**
+     * Returns c(x, t) for valid x and t &gt; 0.
+     *
+     * @param x position
+     * @param t time, &gt; 0
+     * @return c
+     */
+    abstract double valueAt(double x, double t);
+
+    /**
+     * Returns ∂c/∂x for valid x and t &gt; 0.
+     *
+     * @param x position
+     * @param t time, &gt; 0
+     * @return ∂c/∂x
+     */
+    abstract double gradientAt(double x, double t);
+
+    /**
+     * Returns the initial (and, at x = 0 on the half-line, boundary) value.
+     *
+     * @param x position
+     * @return c(x, 0)
+     */
+    abstract double initialValue(double x);
+
+    /**
+     * Returns the initial gradient.
+     *
+     * @param x position
+     * @return ∂c/∂x at t = 0
+     */
+    abstract double initialGradient(double x);
+
+    /** The exponent −μt/R of the decay factor. */
+    final double decayExponent(double t) {
+        return -decayPerRetardation * t;
+    }
+
+    private void checkPoint(double x, double t) {
+        if (domain == Domain.HALF_LINE) {
+            Checks.nonNegative("x", x);
+        } else {
+            Checks.finite("x", x);
+        }
+        Checks.nonNegative("t", t);
+    }
+}

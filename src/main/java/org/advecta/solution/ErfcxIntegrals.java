@@ -1,0 +1,117 @@
+package org.advecta.solution;
+
+import org.advecta.internal.ScaledExp;
+import org.advecta.special.ErrorFunctions;
+
+/**
+ * Integrals of φ(s) = 1/√π − s·erfcx(s) = −erfcx′(s)/2 &gt; 0, the building block that makes
+ * the inlet solutions and their complements sums of positive terms.
+ *
+ * <p>Since ∫_a^b φ(s) ds = (erfcx(a) − erfcx(b))/2, differences of erfcx (and of the
+ * erfc products of the inlet solutions) become integrals of a positive function. Over a wide
+ * interval the difference itself cannot cancel badly; over a narrow one the 10-point
+ * Gauss–Legendre rule is applied to φ, which is smooth on the scale max(1, s) (its nearest
+ * complex singularity-free growth is on that scale), so the rule is exact to rounding when
+ * the half-width is at most a quarter of that scale.
+ */
+final class ErfcxIntegrals {
+
+    /** Positive nodes of the 10-point Gauss–Legendre rule on [−1, 1]. */
+    private static final double[] NODES = {0.14887433898163122, 0.4333953941292472,
+        0.6794095682990244, 0.8650633666889845, 0.9739065285171717};
+    /** Their weights. */
+    private static final double[] WEIGHTS = {0.29552422471475287, 0.26926671930999635,
+        0.21908636251598204, 0.1494513491505806, 0.06667134430868814};
+
+    private ErfcxIntegrals() {
+    }
+
+    /** φ(s) = −erfcx′(s)/2. */
+    static double phi(double s) {
+        return -0.5 * ErrorFunctions.erfcxDerivative(s);
+    }
+
+    /** ψ(s) = erfcx″(s)/2 = −φ′(s). */
+    static double psi(double s) {
+        return 0.5 * ErrorFunctions.erfcxSecondDerivative(s);
+    }
+
+    /**
+     * Whether [m − h, m + h] is narrow enough for the quadrature of φ: φ varies on the scale
+     * max(1, m) for m ≥ −1.
+     */
+    static boolean narrow(double m, double h) {
+        return m >= -1 && h <= 0.25 * Math.max(1, m);
+    }
+
+    /** ∫ φ over [m − h, m + h] by 10-point Gauss–Legendre (for narrow intervals). */
+    static double integralOfPhi(double m, double h) {
+        double sum = 0;
+        for (int i = NODES.length - 1; i >= 0; i--) {
+            final double d = h * NODES[i];
+            sum += WEIGHTS[i] * (phi(m + d) + phi(m - d));
+        }
+        return h * sum;
+    }
+
+    /**
+     * J(a, b) = ½[erfc(a) − exp(−a²)·erfcx(b)] = exp(−a²)·∫_a^b φ(s) ds ≥ 0 for a ≤ b,
+     * without cancellation.
+     */
+    static double j(double a, double b) {
+        final double m = 0.5 * a + 0.5 * b;
+        final double h = 0.5 * b - 0.5 * a;
+        if (narrow(m, h)) {
+            return ScaledExp.value(integralOfPhi(m, h), 0.0, a);
+        }
+        // wide: erfcx(a)/erfcx(b) is bounded away from 1, the difference loses little
+        return 0.5 * (ErrorFunctions.erfc(a)
+            - ScaledExp.value(ErrorFunctions.erfcx(b), 0.0, a));
+    }
+
+    /** ∫ ψ over [m − h, m + h] by 10-point Gauss–Legendre (for narrow intervals). */
+    static double integralOfPsi(double m, double h) {
+        double sum = 0;
+        for (int i = NODES.length - 1; i >= 0; i--) {
+            final double d = h * NODES[i];
+            sum += WEIGHTS[i] * (psi(m + d) + psi(m - d));
+        }
+        return h * sum;
+    }
+
+    /**
+     * The mean of ψ = −φ′ over the interval between p and q (either order), =
+     * (φ(lo) − φ(hi))/(hi − lo), and ψ(p) when p = q.
+     */
+    static double meanOfPsi(double p, double q) {
+        final double lo = Math.min(p, q);
+        final double hi = Math.max(p, q);
+        final double m = 0.5 * lo + 0.5 * hi;
+        final double h = 0.5 * hi - 0.5 * lo;
+        if (h == 0) {
+            return psi(lo);
+        }
+        if (narrow(m, h)) {
+            return integralOfPsi(m, h) / (2 * h);
+        }
+        return (phi(lo) - phi(hi)) / (2 * h);
+    }
+
+    /**
+     * The mean of φ over the interval between p and q (either order), =
+     * (erfcx(lo) − erfcx(hi)) / (2(hi − lo)), and φ(p) when p = q.
+     */
+    static double meanOfPhi(double p, double q) {
+        final double lo = Math.min(p, q);
+        final double hi = Math.max(p, q);
+        final double m = 0.5 * lo + 0.5 * hi;
+        final double h = 0.5 * hi - 0.5 * lo;
+        if (h == 0) {
+            return phi(lo);
+        }
+        if (narrow(m, h)) {
+            return integralOfPhi(m, h) / (2 * h);
+        }
+        return (ErrorFunctions.erfcx(lo) - ErrorFunctions.erfcx(hi)) / (4 * h);
+    }
+}

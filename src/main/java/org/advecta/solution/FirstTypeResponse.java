@@ -1,0 +1,125 @@
+package org.advecta.solution;
+
+import org.advecta.internal.ScaledExp;
+import org.advecta.internal.Spread;
+import org.advecta.special.ErrorFunctions;
+import org.advecta.special.ExpErfc;
+
+/**
+ * The unit response of the first-type inlet c(0, t) = 1 on a clean half-line:
+ * <pre>
+ * F(x, t) = ½ [exp((v−u)x/(2D))·erfc(A_u) + exp((v+u)x/(2D))·erfc(B_u)],   u = √(v² + 4μD)
+ * A_u = (x − ut/R)/L,  B_u = (x + ut/R)/L,  L = √(4Dt/R)
+ * </pre>
+ * (Ogata &amp; Banks 1961, USGS Prof. Paper 411-A, for μ = 0; van Genuchten &amp; Alves 1982,
+ * USDA Tech. Bull. 1661, for μ &gt; 0; Carslaw &amp; Jaeger 1959 §14.2). Since B_u² − A_u² = ux/D,
+ * the second term is exp(s₁ − A_u²)·erfcx(B_u) with s₁ = (v−u)x/(2D) ≤ 0 (for μ ≥ 0), which
+ * cannot overflow. v − u and v + u are formed without cancellation
+ * ((v − u)(v + u) = −4μD).
+ */
+final class FirstTypeResponse implements UnitResponse {
+
+    private static final double SQRT_PI = Math.sqrt(Math.PI);
+
+    private final double v;
+    private final double d;
+    private final double r;
+    private final double mu;
+    private final double u;
+    /** v − u, without cancellation. */
+    private final double vMinusU;
+    /** v − |v|, for the decay-free response R₀ (u₀ = |v|). */
+    private final double vMinusU0;
+
+    FirstTypeResponse(double v, double d, double r, double mu) {
+        this.v = v;
+        this.d = d;
+        this.r = r;
+        this.mu = mu;
+        final double radicand = Math.fma(4 * mu, d, v * v);
+        this.u = Math.sqrt(radicand);
+        if (v >= 0) {
+            this.vMinusU = v + u > 0 ? -4 * mu * d / (v + u) : 0.0;
+        } else {
+            this.vMinusU = v - u;
+        }
+        this.vMinusU0 = Math.min(v, 0) * 2;
+    }
+
+    /** s₁ = (v − u)x/(2D). */
+    private double s1(double x) {
+        return vMinusU * x / (2 * d);
+    }
+
+    @Override
+    public double value(double x, double t, double shift) {
+        final Spread s = Spread.of(d, r, t);
+        final double au = s.scaled(x - u / r * t);
+        final double bu = s.scaled(x + u / r * t);
+        final double e = s1(x) + shift;
+        return 0.5 * (ExpErfc.value(e, au) + ScaledExp.value(ErrorFunctions.erfcx(bu), e, au));
+    }
+
+    @Override
+    public double gradient(double x, double t, double shift) {
+        // ∂F/∂x = (v−u)/(4D)·e^{s1}erfc(A_u) − (e^{s1−A_u²}/L)·[(A_v + B_u)·erfcx(B_u) + 2φ(B_u)]
+        // with A_v + B_u = (2x + (u − v)t/R)/L ≥ 0: every term is ≤ 0, nothing cancels.
+        final Spread s = Spread.of(d, r, t);
+        final double au = s.scaled(x - u / r * t);
+        final double bu = s.scaled(x + u / r * t);
+        final double avPlusBu = s.scaled(2 * x - vMinusU / r * t);
+        final double e = s1(x) + shift;
+        final double bracket = avPlusBu * ErrorFunctions.erfcx(bu) + 2 * ErfcxIntegrals.phi(bu);
+        return vMinusU / (4 * d) * ExpErfc.value(e, au)
+            - ScaledExp.value(s.inverseLength() * bracket, e, au);
+    }
+
+    @Override
+    public double steady(double x) {
+        return Math.exp(s1(x));
+    }
+
+    @Override
+    public double complement(double x, double t) {
+        // F(∞) − F(t) = e^{s1}·½[erfc(−A_u) − e^{−A_u²}erfcx(B_u)] = e^{s1}·J(−A_u, B_u)
+        final Spread s = Spread.of(d, r, t);
+        final double au = s.scaled(x - u / r * t);
+        final double bu = s.scaled(x + u / r * t);
+        return Math.exp(s1(x)) * ErfcxIntegrals.j(-au, bu);
+    }
+
+    @Override
+    public double density(double x, double t) {
+        // ∂F/∂t = x/(t√π L)·exp(−μt/R − A_v²): the first-passage density (Duhamel)
+        final Spread s = Spread.of(d, r, t);
+        final double av = s.scaled(x - v / r * t);
+        return ScaledExp.value(s.scaled(x) / (t * SQRT_PI), -mu / r * t, av);
+    }
+
+    @Override
+    public double densityGradient(double x, double t) {
+        // ∂/∂x of x/(t√π L)·e^{−μt/R − A²} = e^{−μt/R − A²}/(t√π L)·(1 − 2A·x/L)
+        final Spread s = Spread.of(d, r, t);
+        final double av = s.scaled(x - v / r * t);
+        final double q = s.scaled(x);
+        return ScaledExp.value(s.inverseLength() / (t * SQRT_PI), -mu / r * t, av)
+            * (1 - 2 * av * q);
+    }
+
+    @Override
+    public double flush(double x, double t) {
+        // 1 − F₀ = (1 − e^{s1⁰}) + e^{s1⁰}·J(−A₀, B₀), u₀ = |v|, s1⁰ = min(v, 0)·x/D ≤ 0:
+        // two non-negative terms.
+        final Spread s = Spread.of(d, r, t);
+        final double u0 = Math.abs(v);
+        final double a0 = s.scaled(x - u0 / r * t);
+        final double b0 = s.scaled(x + u0 / r * t);
+        final double s10 = vMinusU0 * x / (2 * d);
+        return -Math.expm1(s10) + Math.exp(s10) * ErfcxIntegrals.j(-a0, b0);
+    }
+
+    @Override
+    public double flushGradient(double x, double t) {
+        return -new FirstTypeResponse(v, d, r, 0.0).gradient(x, t, 0.0);
+    }
+}

@@ -1,0 +1,158 @@
+package org.advecta.solution;
+
+import org.advecta.internal.Checks;
+import org.advecta.transport.TransportParameters;
+
+/**
+ * What the two inlet families share: the input shapes (by superposition of unit responses)
+ * and the uniform initial concentration (by the decay-free flush response).
+ */
+abstract class InletSolution extends AbstractSolution1D {
+
+    /** Positive nodes of the 10-point Gauss–Legendre rule on [−1, 1]. */
+    private static final double[] NODES = {0.14887433898163122, 0.4333953941292472,
+        0.6794095682990244, 0.8650633666889845, 0.9739065285171717};
+    /** Their weights. */
+    private static final double[] WEIGHTS = {0.29552422471475287, 0.26926671930999635,
+        0.21908636251598204, 0.1494513491505806, 0.06667134430868814};
+    /**
+     * The pulse response is integrated over [t − t₀, t] by quadrature when t₀ ≤ t/4 and the
+     * impulse response changes by at most this factor across the interval; then the
+     * difference R(t) − R(t − t₀) would cancel while the rule is exact to rounding.
+     */
+    private static final double NARROW_RATIO = Math.exp(2);
+
+    /** The input history. */
+    final InletInput input;
+    /** The uniform initial concentration Cᵢ. */
+    final double initial;
+    /** The unit response with the decay coefficient the input needs. */
+    final UnitResponse response;
+
+    InletSolution(TransportParameters parameters, InletInput input, double initial) {
+        super(parameters, Domain.HALF_LINE);
+        if (input == null) {
+            throw new IllegalArgumentException("input: must not be null");
+        }
+        this.input = input;
+        this.initial = Checks.finite("ci", initial);
+        final double mu = parameters.decayRate();
+        double effective = mu;
+        if (input.kind() == InletInput.Kind.EXPONENTIAL) {
+            // c = e^{−λt}·w, where w solves the same problem with decay μ − λR.
+            effective = mu - input.rate() * retardation;
+            final double limit = (mu + velocity * velocity / (4 * dispersion)) / retardation;
+            if (!(Math.fma(4 * effective, dispersion, velocity * velocity) >= 0)) {
+                throw Checks.fail("lambda", input.rate(),
+                    "must be <= (mu + v^2/(4D))/R = " + limit
+                        + " for a closed form (the input grows faster than transport can carry)");
+            }
+        }
+        this.response = newResponse(velocity, dispersion, retardation, effective);
+    }
+
+    /** Creates the family's unit response for decay coefficient mu. */
+    abstract UnitResponse newResponse(double v, double d, double r, double mu);
+
+    @Override
+    final double valueAt(double x, double t) {
+        final double fromInput = input.level() == 0 ? 0.0 : input.level() * inputResponse(x, t);
+        if (initial == 0) {
+            return fromInput;
+        }
+        return fromInput + initial * Math.exp(decayExponent(t)) * response.flush(x, t);
+    }
+
+    @Override
+    final double gradientAt(double x, double t) {
+        final double fromInput = input.level() == 0 ? 0.0
+            : input.level() * inputResponseGradient(x, t);
+        if (initial == 0) {
+            return fromInput;
+        }
+        return fromInput + initial * Math.exp(decayExponent(t)) * response.flushGradient(x, t);
+    }
+
+    private double inputResponse(double x, double t) {
+        switch (input.kind()) {
+            case EXPONENTIAL:
+                return response.value(x, t, -input.rate() * t);
+            case PULSE:
+                return pulse(x, t);
+            default:
+                return response.value(x, t, 0.0);
+        }
+    }
+
+    private double inputResponseGradient(double x, double t) {
+        switch (input.kind()) {
+            case EXPONENTIAL:
+                return response.gradient(x, t, -input.rate() * t);
+            case PULSE:
+                return pulseGradient(x, t);
+            default:
+                return response.gradient(x, t, 0.0);
+        }
+    }
+
+    /**
+     * R(t) − R(t − t₀), the response to a rectangular pulse (superposition in time), chosen
+     * among three cancellation-free forms: quadrature of the impulse response over
+     * [t − t₀, t] when that is narrow; the direct difference while R(t) is below half its
+     * steady state (the front has not passed: R(t − t₀) ≪ R(t)); the difference of the
+     * complements R(∞) − R once the front has passed.
+     */
+    private double pulse(double x, double t) {
+        final double t0 = input.duration();
+        if (t <= t0) {
+            return response.value(x, t, 0.0);
+        }
+        final double t1 = t - t0;
+        if (narrowInTime(x, t1, t)) {
+            return integrate(x, t1, t, false);
+        }
+        final double now = response.value(x, t, 0.0);
+        if (now <= 0.5 * response.steady(x)) {
+            return now - response.value(x, t1, 0.0);
+        }
+        return response.complement(x, t1) - response.complement(x, t);
+    }
+
+    private double pulseGradient(double x, double t) {
+        final double t0 = input.duration();
+        if (t <= t0) {
+            return response.gradient(x, t, 0.0);
+        }
+        final double t1 = t - t0;
+        if (narrowInTime(x, t1, t)) {
+            return integrate(x, t1, t, true);
+        }
+        return response.gradient(x, t, 0.0) - response.gradient(x, t1, 0.0);
+    }
+
+    private boolean narrowInTime(double x, double t1, double t) {
+        if (!(t - t1 <= 0.25 * t) || x == 0) {
+            return false;
+        }
+        final double a = response.density(x, t1);
+        final double b = response.density(x, 0.5 * t1 + 0.5 * t);
+        final double c = response.density(x, t);
+        final double max = Math.max(a, Math.max(b, c));
+        final double min = Math.min(a, Math.min(b, c));
+        return min > 0 && max <= NARROW_RATIO * min;
+    }
+
+    /** ∫ over [t1, t] of the impulse response (or its x-derivative), 10-point Gauss–Legendre. */
+    private double integrate(double x, double t1, double t, boolean gradient) {
+        final double m = 0.5 * t1 + 0.5 * t;
+        final double h = 0.5 * t - 0.5 * t1;
+        double sum = 0;
+        for (int i = NODES.length - 1; i >= 0; i--) {
+            final double d = h * NODES[i];
+            sum += WEIGHTS[i] * (gradient
+                ? response.densityGradient(x, m + d) + response.densityGradient(x, m - d)
+                : response.density(x, m + d) + response.density(x, m - d));
+        }
+        return h * sum;
+    }
+}

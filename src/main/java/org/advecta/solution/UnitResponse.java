@@ -1,0 +1,36 @@
+package org.advecta.solution;
+
+/**
+ * The response R(x, t) of an inlet problem to a unit constant input switched on at t = 0 into
+ * a clean half-line, for one decay coefficient μ_e, with the pieces that the input shapes and
+ * the initial concentration need. Implementations hold precomputed constants only.
+ */
+interface UnitResponse {
+
+    /** Returns exp(shift)·R(x, t), with the shift folded into the exponent. */
+    double value(double x, double t, double shift);
+
+    /** Returns exp(shift)·∂R/∂x. */
+    double gradient(double x, double t, double shift);
+
+    /** Returns R(x, ∞) (the steady state; for μ_e ≥ 0 only). */
+    double steady(double x);
+
+    /** Returns R(x, ∞) − R(x, t) ≥ 0 without cancellation (for μ_e ≥ 0 only). */
+    double complement(double x, double t);
+
+    /** Returns ∂R/∂t, the response to a unit impulse of input at t = 0. */
+    double density(double x, double t);
+
+    /** Returns ∂²R/∂x∂t. */
+    double densityGradient(double x, double t);
+
+    /**
+     * Returns 1 − R₀(x, t), R₀ the response without decay: the fraction of a uniform initial
+     * concentration still present (before decay) when the inlet holds zero.
+     */
+    double flush(double x, double t);
+
+    /** Returns −∂R₀/∂x. */
+    double flushGradient(double x, double t);
+}
