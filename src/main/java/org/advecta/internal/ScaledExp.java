@@ -138,6 +138,14 @@ public final class ScaledExp {
      * @return the product
      */
     private static double finish(double m, double e, double c) {
+        // The common case in one test, so that a batch loop runs without further branches.
+        if (e >= EXP_SUBNORMAL && e <= EXP_OVERFLOW && Math.abs(c) < SMALL_CORRECTION) {
+            return m * (1.0 + c) * Math.exp(e);
+        }
+        return finishRare(m, e, c);
+    }
+
+    private static double finishRare(double m, double e, double c) {
         if (e < EXP_UNDERFLOW) {
             return 0.0;
         }

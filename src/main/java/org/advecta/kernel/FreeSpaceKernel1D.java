@@ -153,8 +153,16 @@ public final class FreeSpaceKernel1D {
         }
         final double c = centre(t);
         final double decay = decayExponent(t);
+        final double high = s.high;
+        final double low = s.low;
+        final double norm = s.norm;
         for (int i = 0; i < x.length; i++) {
-            out[i] = value(Checks.finite("x", x[i]) - c, s, decay);
+            // value(ξ, s, decay) written out: ξ²·R/(4Dt) in double-double, then the scaled exp
+            final double xi = Checks.finite("x", x[i]) - c;
+            final double p = xi * xi;
+            final double qh = p * high;
+            final double ql = Math.fma(p, high, -qh) + (p * low + Math.fma(xi, xi, -p) * high);
+            out[i] = ScaledExp.valueOfSplit(norm, decay, qh, ql);
         }
     }
 

@@ -75,6 +75,21 @@ final class FirstTypeResponse implements UnitResponse {
     }
 
     @Override
+    public double steadyRate() {
+        return vMinusU / (2 * d);
+    }
+
+    @Override
+    public double gradientRemainder(double x, double t) {
+        // k·F − F_x = (2e^{s1 − A_u²}/L)·[φ(B_u) + Q·erfcx(B_u)],  Q = x/L
+        final Spread s = Spread.of(d, r, t);
+        final double au = s.scaled(x - u / r * t);
+        final double bu = s.scaled(x + u / r * t);
+        final double bracket = ErfcxIntegrals.phi(bu) + s.scaled(x) * ErrorFunctions.erfcx(bu);
+        return ScaledExp.value(2 * s.inverseLength() * bracket, s1(x), au);
+    }
+
+    @Override
     public double steady(double x) {
         return Math.exp(s1(x));
     }

@@ -44,8 +44,8 @@ abstract class InletSolution extends AbstractSolution1D {
             final double limit = (mu + velocity * velocity / (4 * dispersion)) / retardation;
             if (!(Math.fma(4 * effective, dispersion, velocity * velocity) >= 0)) {
                 throw Checks.fail("lambda", input.rate(),
-                    "must be <= (mu + v^2/(4D))/R = " + limit
-                        + " for a closed form (the input grows faster than transport can carry)");
+                    "must be <= (mu + v^2/(4D))/R = " + limit + " for the closed form (beyond it"
+                        + " u = sqrt(v^2 + 4(mu - lambda R)D) is imaginary)");
             }
         }
         this.response = newResponse(velocity, dispersion, retardation, effective);
@@ -127,7 +127,12 @@ abstract class InletSolution extends AbstractSolution1D {
         if (narrowInTime(x, t1, t)) {
             return integrate(x, t1, t, true);
         }
-        return response.gradient(x, t, 0.0) - response.gradient(x, t1, 0.0);
+        if (response.value(x, t, 0.0) <= 0.5 * response.steady(x)) {
+            return response.gradient(x, t, 0.0) - response.gradient(x, t1, 0.0);
+        }
+        // after the front: both gradients are near the steady state's; use the remainders
+        return response.steadyRate() * pulse(x, t) + response.gradientRemainder(x, t1)
+            - response.gradientRemainder(x, t);
     }
 
     private boolean narrowInTime(double x, double t1, double t) {

@@ -73,6 +73,29 @@ final class ThirdTypeResponse implements UnitResponse {
     }
 
     @Override
+    public double steadyRate() {
+        return vMinusU / (2 * d);
+    }
+
+    @Override
+    public double gradientRemainder(double x, double t) {
+        // k·T − T_x = −v/(u+v)·(4/L)·e^{s1 − A_u²}·inner
+        final Point p = new Point(x, t);
+        return -v / (u + v) * ScaledExp.value(4 * p.s.inverseLength() * inner(p, t), p.s1, p.au);
+    }
+
+    /** The bracket of the gradient (see {@link #gradient}); ≤ 0. */
+    private double inner(Point p, double t) {
+        final double pu = p.s.scaled(u / r * t);
+        final double m = ErfcxIntegrals.meanOfPhi(p.bv, p.bu);
+        final double mPsi = ErfcxIntegrals.meanOfPsi(p.bv, p.bu);
+        final double phiBu = ErfcxIntegrals.phi(p.bu);
+        final double pvMinusPu = p.s.scaled(vMinusU / r * t);
+        return -pu * ErfcxIntegrals.psi(p.bu) - p.pv * mPsi
+            - 4 * pu * p.q * phiBu - 2 * pu * p.au * (m - phiBu) - 2 * pvMinusPu * p.au * m;
+    }
+
+    @Override
     public double gradient(double x, double t, double shift) {
         // T_x = (v−u)/(2D)·T + v/(u+v)·(4/L)·e^{s1 − A_u²}·inner, where (with P_u = ut/(RL))
         // inner = −P_u ψ(B_u) − P_v M_ψ − 4 P_u Q φ(B_u) − 2 P_u A_u (M − φ(B_u))
@@ -81,15 +104,8 @@ final class ThirdTypeResponse implements UnitResponse {
         // a sign (erfcx = ψ + 2sφ, A_u + B_u = 2Q).
         final Point p = new Point(x, t);
         final double e = p.s1 + shift;
-        final double pu = p.s.scaled(u / r * t);
-        final double m = ErfcxIntegrals.meanOfPhi(p.bv, p.bu);
-        final double mPsi = ErfcxIntegrals.meanOfPsi(p.bv, p.bu);
-        final double phiBu = ErfcxIntegrals.phi(p.bu);
-        final double pvMinusPu = p.s.scaled(vMinusU / r * t);
-        final double inner = -pu * ErfcxIntegrals.psi(p.bu) - p.pv * mPsi
-            - 4 * pu * p.q * phiBu - 2 * pu * p.au * (m - phiBu) - 2 * pvMinusPu * p.au * m;
         return vMinusU / (2 * d) * value(x, t, shift)
-            + v / (u + v) * ScaledExp.value(4 * p.s.inverseLength() * inner, e, p.au);
+            + v / (u + v) * ScaledExp.value(4 * p.s.inverseLength() * inner(p, t), e, p.au);
     }
 
     @Override

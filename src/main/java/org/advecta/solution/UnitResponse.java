@@ -19,6 +19,16 @@ interface UnitResponse {
     /** Returns R(x, ∞) − R(x, t) ≥ 0 without cancellation (for μ_e ≥ 0 only). */
     double complement(double x, double t);
 
+    /** Returns k = (v − u)/(2D) ≤ 0, the spatial decay rate of the steady state. */
+    double steadyRate();
+
+    /**
+     * Returns K(x, t) = k·R − ∂R/∂x, written without cancellation, so that the gradient of
+     * a pulse after the front has passed, R_x(t) − R_x(t − t₀) = k·(R(t) − R(t − t₀))
+     * + K(t − t₀) − K(t), needs no difference of nearly equal gradients.
+     */
+    double gradientRemainder(double x, double t);
+
     /** Returns ∂R/∂t, the response to a unit impulse of input at t = 0. */
     double density(double x, double t);
 
