@@ -98,6 +98,25 @@ final class ErfcxIntegrals {
     }
 
     /**
+     * exp(e)·J(a, b) for a ≤ b, without overflow of exp(e) or underflow of J first:
+     * exp(e)·J = exp(e − a²)·∫_a^b φ, and ∫_a^b φ = (erfcx(a) − erfcx(b))/2 is an ordinary
+     * number unless a &lt; −26 (where erfcx(a) overflows but J ≈ erfc(a)/2 ≈ 1).
+     */
+    static double expTimesJ(double e, double a, double b) {
+        if (a < ERFCX_OVERFLOW) {
+            return Math.exp(e) * j(a, b);
+        }
+        final double m = 0.5 * a + 0.5 * b;
+        final double h = 0.5 * b - 0.5 * a;
+        final double integral = narrow(m, h) ? integralOfPhi(m, h)
+            : 0.5 * (ErrorFunctions.erfcx(a) - ErrorFunctions.erfcx(b));
+        return ScaledExp.value(integral, e, a);
+    }
+
+    /** Below this, erfcx overflows (2·exp(26.6²) &gt; MAX_VALUE); −26 leaves a margin. */
+    private static final double ERFCX_OVERFLOW = -26;
+
+    /**
      * The mean of φ over the interval between p and q (either order), =
      * (erfcx(lo) − erfcx(hi)) / (2(hi − lo)), and φ(p) when p = q.
      */

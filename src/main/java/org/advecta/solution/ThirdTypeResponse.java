@@ -67,7 +67,7 @@ final class ThirdTypeResponse implements UnitResponse {
         final Point p = new Point(x, t);
         final double e = p.s1 + shift;
         final double m = ErfcxIntegrals.meanOfPhi(p.bv, p.bu);
-        final double first = 2 * Math.exp(e) * ErfcxIntegrals.j(p.au, p.bu);
+        final double first = 2 * ErfcxIntegrals.expTimesJ(e, p.au, p.bu);
         final double second = ScaledExp.value(4 * p.pv * m, e, p.au);
         return v / (u + v) * (first + second);
     }
