@@ -38,7 +38,7 @@ public final class ScaledExp {
     /**
      * Returns {@code m × exp(s − w²)}.
      *
-     * @param m finite multiplier, m ≥ 0
+     * @param m finite multiplier (its sign is the result's)
      * @param s finite shift
      * @param w any double
      * @return the product, 0 when it is below half the smallest subnormal, +∞ when it
@@ -61,7 +61,7 @@ public final class ScaledExp {
      * Returns {@code m × exp(s − (qHigh + qLow))}, for an exponent part given as an unevaluated
      * double-double sum (|qLow| ≤ ulp(qHigh)).
      *
-     * @param m finite multiplier, m ≥ 0
+     * @param m finite multiplier (its sign is the result's)
      * @param s finite shift
      * @param qHigh leading part of the subtracted exponent, ≥ 0 or +∞
      * @param qLow trailing part
@@ -82,7 +82,7 @@ public final class ScaledExp {
      * Returns {@code m × exp(s − w1² − w2²)}, with the same contract as
      * {@link #value(double, double, double)}.
      *
-     * @param m finite multiplier, m ≥ 0
+     * @param m finite multiplier (its sign is the result's)
      * @param s finite shift
      * @param w1 first scaled distance
      * @param w2 second scaled distance
@@ -107,7 +107,7 @@ public final class ScaledExp {
      * Returns {@code m × exp(s − w1² − w2² − w3²)}, with the same contract as
      * {@link #value(double, double, double)}.
      *
-     * @param m finite multiplier, m ≥ 0
+     * @param m finite multiplier (its sign is the result's)
      * @param s finite shift
      * @param w1 first scaled distance
      * @param w2 second scaled distance

@@ -113,7 +113,7 @@ public final class FreeSpaceKernel1D {
             return 0.0;
         }
         final double xi = x - centre(t);
-        return gradient(xi, s, value(xi, s, decayExponent(t)));
+        return gradient(xi, s, decayExponent(t));
     }
 
     /**
@@ -131,7 +131,7 @@ public final class FreeSpaceKernel1D {
             return x == centre(t) && velocity != 0 ? velocity * Double.POSITIVE_INFINITY : 0.0;
         }
         final double xi = x - centre(t);
-        return flux(xi, s, value(xi, s, decayExponent(t)));
+        return flux(xi, s, decayExponent(t));
     }
 
     /**
@@ -181,7 +181,7 @@ public final class FreeSpaceKernel1D {
         final double decay = decayExponent(t);
         for (int i = 0; i < x.length; i++) {
             final double xi = Checks.finite("x", x[i]) - c;
-            out[i] = s == null || s.collapsed ? 0.0 : gradient(xi, s, value(xi, s, decay));
+            out[i] = s == null || s.collapsed ? 0.0 : gradient(xi, s, decay);
         }
     }
 
@@ -206,22 +206,31 @@ public final class FreeSpaceKernel1D {
         final double decay = decayExponent(t);
         for (int i = 0; i < x.length; i++) {
             final double xi = Checks.finite("x", x[i]) - c;
-            out[i] = flux(xi, s, value(xi, s, decay));
+            out[i] = flux(xi, s, decay);
         }
     }
 
     private static double value(double xi, Spread s, double decay) {
+        return scaled(xi, s, decay, 1.0);
+    }
+
+    /**
+     * Returns factor × G. The factor enters the multiplier of the exponential, so that a
+     * gradient or flux that is a normal double is not formed from a subnormal G.
+     */
+    private static double scaled(double xi, Spread s, double decay, double factor) {
         final double qh = s.exponentHigh(xi);
-        return ScaledExp.valueOfSplit(s.norm, decay, qh, s.exponentLow(xi, qh));
+        return ScaledExp.valueOfSplit(s.norm * factor, decay, qh, s.exponentLow(xi, qh));
     }
 
-    private static double gradient(double xi, Spread s, double g) {
-        return -2 * xi * s.high * g;
+    private static double gradient(double xi, Spread s, double decay) {
+        // ∂G/∂x = −2ξ·R/(4Dt)·G
+        return scaled(xi, s, decay, -2 * xi * s.high);
     }
 
-    private double flux(double xi, Spread s, double g) {
+    private double flux(double xi, Spread s, double decay) {
         // v·G − D·∂G/∂x = G·(v + 2D·ξ·R/(4Dt))
-        return g * (velocity + 2 * dispersion * xi * s.high);
+        return scaled(xi, s, decay, velocity + 2 * dispersion * xi * s.high);
     }
 
     /** Returns the spread at t, or null at t = 0; validates t. */

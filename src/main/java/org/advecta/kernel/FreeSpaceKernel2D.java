@@ -246,15 +246,20 @@ public final class FreeSpaceKernel2D {
             if (limit) {
                 return x == centreX && y == y0 ? Double.POSITIVE_INFINITY : 0.0;
             }
-            return Spread.gaussian(norm, decay, sx, x - centreX, sy, y - y0);
+            return scaled(x, y, 1.0);
+        }
+
+        /** factor × G, the factor in the exponential's multiplier (no subnormal G first). */
+        private double scaled(double x, double y, double factor) {
+            return Spread.gaussian(norm * factor, decay, sx, x - centreX, sy, y - y0);
         }
 
         double gradientX(double x, double y) {
-            return limit ? 0.0 : -2 * (x - centreX) * sx.high * value(x, y);
+            return limit ? 0.0 : scaled(x, y, -2 * (x - centreX) * sx.high);
         }
 
         double gradientY(double x, double y) {
-            return limit ? 0.0 : -2 * (y - y0) * sy.high * value(x, y);
+            return limit ? 0.0 : scaled(x, y, -2 * (y - y0) * sy.high);
         }
 
         double fluxX(double x, double y) {
@@ -263,7 +268,7 @@ public final class FreeSpaceKernel2D {
                     ? velocity * Double.POSITIVE_INFINITY : 0.0;
             }
             // v·G − D_L·∂G/∂x = G·(v + 2 D_L ξ R/(4 D_L t))
-            return value(x, y) * (velocity + 2 * dL * (x - centreX) * sx.high);
+            return scaled(x, y, velocity + 2 * dL * (x - centreX) * sx.high);
         }
     }
 }

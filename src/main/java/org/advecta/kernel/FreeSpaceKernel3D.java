@@ -209,10 +209,9 @@ public final class FreeSpaceKernel3D {
             final double xi = finiteX(x[i]);
             final double yi = finiteY(y[i]);
             final double zi = finiteZ(z[i]);
-            final double g = f.value(xi, yi, zi);
-            out[0][i] = f.gradientOf(0, xi, yi, zi, g);
-            out[1][i] = f.gradientOf(1, xi, yi, zi, g);
-            out[2][i] = f.gradientOf(2, xi, yi, zi, g);
+            out[0][i] = f.gradient(0, xi, yi, zi);
+            out[1][i] = f.gradient(1, xi, yi, zi);
+            out[2][i] = f.gradient(2, xi, yi, zi);
         }
     }
 
@@ -234,10 +233,9 @@ public final class FreeSpaceKernel3D {
             final double xi = finiteX(x[i]);
             final double yi = finiteY(y[i]);
             final double zi = finiteZ(z[i]);
-            final double g = f.value(xi, yi, zi);
-            out[0][i] = f.fluxXOf(xi, yi, zi, g);
-            out[1][i] = -dT * f.gradientOf(1, xi, yi, zi, g);
-            out[2][i] = -dV * f.gradientOf(2, xi, yi, zi, g);
+            out[0][i] = f.fluxX(xi, yi, zi);
+            out[1][i] = -dT * f.gradient(1, xi, yi, zi);
+            out[2][i] = -dV * f.gradient(2, xi, yi, zi);
         }
     }
 
@@ -309,33 +307,30 @@ public final class FreeSpaceKernel3D {
             if (limit) {
                 return atCentre(x, y, z) ? Double.POSITIVE_INFINITY : 0.0;
             }
-            return Spread.gaussian(norm, decay, spreads[0], x - centreX, spreads[1], y - y0,
-                spreads[2], z - z0);
+            return scaled(x, y, z, 1.0);
+        }
+
+        /** factor × G, the factor in the exponential's multiplier (no subnormal G first). */
+        private double scaled(double x, double y, double z, double factor) {
+            return Spread.gaussian(norm * factor, decay, spreads[0], x - centreX, spreads[1],
+                y - y0, spreads[2], z - z0);
         }
 
         double gradient(int axis, double x, double y, double z) {
-            return gradientOf(axis, x, y, z, value(x, y, z));
-        }
-
-        double gradientOf(int axis, double x, double y, double z, double g) {
             if (limit) {
                 return 0.0;
             }
             final double d = axis == 0 ? x - centreX : axis == 1 ? y - y0 : z - z0;
-            return -2 * d * spreads[axis].high * g;
+            return scaled(x, y, z, -2 * d * spreads[axis].high);
         }
 
         double fluxX(double x, double y, double z) {
-            return fluxXOf(x, y, z, value(x, y, z));
-        }
-
-        double fluxXOf(double x, double y, double z, double g) {
             if (limit) {
                 return atCentre(x, y, z) && velocity != 0
                     ? velocity * Double.POSITIVE_INFINITY : 0.0;
             }
             // v·G − D_L·∂G/∂x = G·(v + 2 D_L ξ R/(4 D_L t))
-            return g * (velocity + 2 * dL * (x - centreX) * spreads[0].high);
+            return scaled(x, y, z, velocity + 2 * dL * (x - centreX) * spreads[0].high);
         }
     }
 }

@@ -64,9 +64,9 @@ public final class InitialGaussian extends AbstractSolution1D {
         final Spread s = spread(t);
         final double xi = x - Math.fma(velocity / retardation, t, centre);
         final double qh = s.exponentHigh(xi);
-        final double c = ScaledExp.valueOfSplit(s.norm, decayExponent(t), qh,
+        // the factor −2ξ/(2S²)·M goes into the multiplier: no subnormal c is formed first
+        return ScaledExp.valueOfSplit(s.norm * (-2 * xi * s.high * mass), decayExponent(t), qh,
             s.exponentLow(xi, qh));
-        return -2 * xi * s.high * c * mass;
     }
 
     @Override
@@ -79,7 +79,10 @@ public final class InitialGaussian extends AbstractSolution1D {
     double initialGradient(double x) {
         final double twice = 2 * width * width;
         final Spread s = Spread.ofTwiceVariance(twice, Math.fma(2 * width, width, -twice));
-        return -2 * (x - centre) * s.high * initialValue(x);
+        final double xi = x - centre;
+        final double qh = s.exponentHigh(xi);
+        return ScaledExp.valueOfSplit(s.norm * (-2 * xi * s.high * mass), 0.0, qh,
+            s.exponentLow(xi, qh));
     }
 
     private double valueWithTwiceVariance(double x, double hi, double lo) {

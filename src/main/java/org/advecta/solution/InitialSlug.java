@@ -83,9 +83,9 @@ public final class InitialSlug extends AbstractSolution1D {
         // factor out the larger of the two exponentials: α² − β² = 4mh.
         final double diff;
         if (m >= 0) {
-            diff = ScaledExp.value(scale, decay, m - h) * Math.expm1(-4 * m * h);
+            diff = ScaledExp.value(scale * Math.expm1(-4 * m * h), decay, m - h);
         } else {
-            diff = -ScaledExp.value(scale, decay, m + h) * Math.expm1(4 * m * h);
+            diff = ScaledExp.value(-scale * Math.expm1(4 * m * h), decay, m + h);
         }
         return c0 * diff;
     }
