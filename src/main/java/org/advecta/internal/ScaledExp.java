@@ -47,7 +47,7 @@ public final class ScaledExp {
     public static double value(double m, double s, double w) {
         final double p = w * w;
         if (p == Double.POSITIVE_INFINITY || w != w) {
-            return w != w ? Double.NaN : 0.0;
+            return w != w ? Double.NaN : Math.copySign(0.0, m);
         }
         final double pLow = Math.fma(w, w, -p);
         final double e = s - p;
@@ -70,7 +70,7 @@ public final class ScaledExp {
      */
     public static double valueOfSplit(double m, double s, double qHigh, double qLow) {
         if (!(qHigh < Double.POSITIVE_INFINITY)) {
-            return qHigh != qHigh ? Double.NaN : 0.0;
+            return qHigh != qHigh ? Double.NaN : Math.copySign(0.0, m);
         }
         final double e = s - qHigh;
         final double bv = e - s;
@@ -92,7 +92,7 @@ public final class ScaledExp {
         final double p1 = w1 * w1;
         final double p2 = w2 * w2;
         if (!(p1 + p2 < Double.POSITIVE_INFINITY)) {
-            return (w1 != w1 || w2 != w2) ? Double.NaN : 0.0;
+            return (w1 != w1 || w2 != w2) ? Double.NaN : Math.copySign(0.0, m);
         }
         double e = s - p1;
         double bv = e - s;
@@ -117,7 +117,7 @@ public final class ScaledExp {
     public static double value(double m, double s, double w1, double w2, double w3) {
         final double p3 = w3 * w3;
         if (!(p3 < Double.POSITIVE_INFINITY)) {
-            return w3 != w3 ? Double.NaN : 0.0;
+            return w3 != w3 ? Double.NaN : Math.copySign(0.0, m);
         }
         // Fold the third square into the shift with its exact error carried separately.
         final double pLow = Math.fma(w3, w3, -p3);
@@ -147,7 +147,7 @@ public final class ScaledExp {
 
     private static double finishRare(double m, double e, double c) {
         if (e < EXP_UNDERFLOW) {
-            return 0.0;
+            return Math.copySign(0.0, m);
         }
         final double mc = m * correction(c);
         if (e >= EXP_SUBNORMAL && e <= EXP_OVERFLOW) {
