@@ -4,18 +4,21 @@ import java.io.PrintStream;
 import java.util.Locale;
 import org.advecta.kernel.FreeSpaceKernel1D;
 import org.advecta.kernel.FreeSpaceKernel3D;
+import org.advecta.solution.FirstTypeInlet;
+import org.advecta.solution.InletInput;
+import org.advecta.solution.ThirdTypeInlet;
 import org.advecta.special.ErrorFunctions;
 import org.advecta.special.ExpErfc;
 import org.advecta.transport.TransportParameters;
 
 /**
- * A short runnable tour of the kernels, run by README's first command. The numbers are an
- * invented example: a dye released into a channel flowing at 0.4 m/s with 0.05 m²/s of
- * longitudinal dispersion.
+ * A short runnable tour of the library, run by README's first command. The numbers are an
+ * invented example: a dye released into a channel, a plume in an aquifer, and a soil column
+ * fed with a tracer.
  */
-public final class KernelTour {
+public final class Tour {
 
-    private KernelTour() {
+    private Tour() {
     }
 
     /**
@@ -49,6 +52,19 @@ public final class KernelTour {
             + " R = 2, mu = 0.001 /d), centreline after 200 d:");
         for (double x = 0; x <= 20; x += 5) {
             out.printf(Locale.ROOT, "  x = %4.1f m   G = %.6e 1/m3%n", x, plume.value(x, 0, 0, 200));
+        }
+
+        out.println();
+        final TransportParameters column = TransportParameters.of(0.5, 1e-4)
+            .withRetardation(1.2);
+        out.println("Soil column fed with a tracer of 100 mg/L: v = 0.5 m/d, D = 1e-4 m2/d,"
+            + " R = 1.2 (Peclet number 1000 over 0.2 m); breakthrough at x = 0.2 m:");
+        final FirstTypeInlet held = FirstTypeInlet.of(column, InletInput.constant(100));
+        final ThirdTypeInlet fed = ThirdTypeInlet.of(column, InletInput.constant(100));
+        out.println("  t (d)   first-type inlet   flux inlet (resident)   flux inlet (effluent)");
+        for (double t = 0.40; t <= 0.561; t += 0.04) {
+            out.printf(Locale.ROOT, "  %.2f    %14.6f    %19.6f    %19.6f%n", t,
+                held.value(0.2, t), fed.value(0.2, t), fed.fluxAveraged(0.2, t));
         }
     }
 }
