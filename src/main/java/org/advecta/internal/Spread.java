@@ -120,6 +120,89 @@ public final class Spread {
     }
 
     /**
+     * Returns the centre x₀ + (v/R)·t as a double-double {high, low}, so that distances from
+     * it carry no rounding of the drift (which would cost κ·2⁻⁵³ relative in the far tails,
+     * where κ ≈ 2·ξ²R/(4Dt) reaches 1e3 and more).
+     *
+     * @param x0 the release point
+     * @param v velocity
+     * @param r retardation
+     * @param t time
+     * @return {high, low}
+     */
+    public static double[] centre(double x0, double v, double r, double t) {
+        // v/R in double-double, times t in double-double, plus x0 by two-sum
+        final double q = v / r;
+        final double qLow = Math.fma(-q, r, v) / r;
+        final double d = q * t;
+        final double dLow = Math.fma(q, t, -d) + qLow * t;
+        final double c = x0 + d;
+        final double bv = c - x0;
+        final double err = (x0 - (c - bv)) + (d - bv);
+        final double low = err + dLow;
+        final double high = c + low;
+        return new double[] {high, low - (high - c)};
+    }
+
+    /**
+     * Returns the leading part of ξ²·R/(4Dt) for ξ = x − (cHigh + cLow) carried exactly.
+     *
+     * @param x the position
+     * @param cHigh leading part of the centre
+     * @param cLow trailing part of the centre
+     * @return the leading part of the exponent
+     */
+    public double exponentHigh(double x, double cHigh, double cLow) {
+        final double xi = x - cHigh;
+        final double xiLow = twoDiffError(x, cHigh, xi) - cLow;
+        final double h = xi + xiLow;
+        return h * h * high;
+    }
+
+    /**
+     * Returns the trailing part of ξ²·R/(4Dt) for ξ = x − (cHigh + cLow), given the leading
+     * part from {@link #exponentHigh(double, double, double)}.
+     *
+     * @param x the position
+     * @param cHigh leading part of the centre
+     * @param cLow trailing part of the centre
+     * @param qHigh the leading part
+     * @return the trailing part
+     */
+    public double exponentLow(double x, double cHigh, double cLow, double qHigh) {
+        final double xi = x - cHigh;
+        final double xiLow = twoDiffError(x, cHigh, xi) - cLow;
+        final double h = xi + xiLow;
+        final double l = xiLow - (h - xi);
+        final double p = h * h;
+        final double pLow = Math.fma(h, h, -p) + 2 * h * l;
+        return Math.fma(p, high, -qHigh) + (p * low + pLow * high);
+    }
+
+    /**
+     * Returns the decay exponent −μt/R as a double-double {high, low}: its rounding would
+     * cost |μt/R|·2⁻⁵³ relative, hundreds of units in the subnormal range.
+     *
+     * @param mu decay coefficient
+     * @param r retardation
+     * @param t time
+     * @return {high, low}
+     */
+    public static double[] decay(double mu, double r, double t) {
+        final double p = mu * t;
+        final double pLow = Math.fma(mu, t, -p);
+        final double q = p / r;
+        final double qLow = (Math.fma(-q, r, p) + pLow) / r;
+        return new double[] {-q, -qLow};
+    }
+
+    /** The exact error of the rounded difference d = a − b (Knuth's two-sum). */
+    private static double twoDiffError(double a, double b, double d) {
+        final double bv = d - a;
+        return (a - (d - bv)) + (-b - bv);
+    }
+
+    /**
      * Returns m·exp(s − qx − qy) with qx = ξ²R/(4D_x t), qy = η²R/(4D_y t), the exponent
      * summed in double-double.
      *
@@ -134,11 +217,50 @@ public final class Spread {
     public static double gaussian(double m, double s, Spread sx, double xi, Spread sy, double eta) {
         final double hx = sx.exponentHigh(xi);
         final double hy = sy.exponentHigh(eta);
+        return combine(m, s, hx, sx.exponentLow(xi, hx), hy, sy.exponentLow(eta, hy));
+    }
+
+    /**
+     * Returns m·exp(s − qx − qy) for exponent parts given as double-doubles.
+     *
+     * @param m finite multiplier
+     * @param s finite shift
+     * @param hx leading part of qx
+     * @param lx trailing part of qx
+     * @param hy leading part of qy
+     * @param ly trailing part of qy
+     * @return the product
+     */
+    public static double combine(double m, double s, double hx, double lx, double hy,
+                                 double ly) {
         final double h = hx + hy;
         final double bv = h - hx;
         final double err = (hx - (h - bv)) + (hy - bv);
-        return ScaledExp.valueOfSplit(m, s, h,
-            err + sx.exponentLow(xi, hx) + sy.exponentLow(eta, hy));
+        return ScaledExp.valueOfSplit(m, s, h, err + lx + ly);
+    }
+
+    /**
+     * Returns m·exp(s − qx − qy − qz) for exponent parts given as double-doubles.
+     *
+     * @param m finite multiplier
+     * @param s finite shift
+     * @param hx leading part of qx
+     * @param lx trailing part of qx
+     * @param hy leading part of qy
+     * @param ly trailing part of qy
+     * @param hz leading part of qz
+     * @param lz trailing part of qz
+     * @return the product
+     */
+    public static double combine(double m, double s, double hx, double lx, double hy,
+                                 double ly, double hz, double lz) {
+        final double h1 = hx + hy;
+        double bv = h1 - hx;
+        double err = (hx - (h1 - bv)) + (hy - bv);
+        final double h = h1 + hz;
+        bv = h - h1;
+        err += (h1 - (h - bv)) + (hz - bv);
+        return ScaledExp.valueOfSplit(m, s, h, err + lx + ly + lz);
     }
 
     /**
@@ -155,17 +277,11 @@ public final class Spread {
      * @return the product
      */
     public static double gaussian(double m, double s, Spread sx, double xi, Spread sy, double eta,
-                           Spread sz, double zeta) {
+                                  Spread sz, double zeta) {
         final double hx = sx.exponentHigh(xi);
         final double hy = sy.exponentHigh(eta);
         final double hz = sz.exponentHigh(zeta);
-        final double h1 = hx + hy;
-        double bv = h1 - hx;
-        double err = (hx - (h1 - bv)) + (hy - bv);
-        final double h = h1 + hz;
-        bv = h - h1;
-        err += (h1 - (h - bv)) + (hz - bv);
-        return ScaledExp.valueOfSplit(m, s, h, err + sx.exponentLow(xi, hx)
-            + sy.exponentLow(eta, hy) + sz.exponentLow(zeta, hz));
+        return combine(m, s, hx, sx.exponentLow(xi, hx), hy, sy.exponentLow(eta, hy), hz,
+            sz.exponentLow(zeta, hz));
     }
 }

@@ -45,16 +45,14 @@ public final class FreeSpaceKernel1D {
     private final double velocity;
     private final double dispersion;
     private final double retardation;
-    private final double retardedVelocity;
-    private final double decayPerRetardation;
+    private final double decayRate;
 
     private FreeSpaceKernel1D(TransportParameters p, double source) {
         this.source = source;
         this.velocity = p.velocity();
         this.dispersion = p.dispersion();
         this.retardation = p.retardation();
-        this.retardedVelocity = p.retardedVelocity();
-        this.decayPerRetardation = p.decayRate() / p.retardation();
+        this.decayRate = p.decayRate();
     }
 
     /**
@@ -95,7 +93,8 @@ public final class FreeSpaceKernel1D {
         if (s == null || s.collapsed) {
             return x == centre(t) ? Double.POSITIVE_INFINITY : 0.0;
         }
-        return value(x - centre(t), s, decayExponent(t));
+        final double[] c = Spread.centre(source, velocity, retardation, t);
+        return scaled(x, c[0], c[1], s, decay(t), 1.0);
     }
 
     /**
@@ -112,8 +111,8 @@ public final class FreeSpaceKernel1D {
         if (s == null || s.collapsed) {
             return 0.0;
         }
-        final double xi = x - centre(t);
-        return gradient(xi, s, decayExponent(t));
+        final double[] c = Spread.centre(source, velocity, retardation, t);
+        return gradient(x, c[0], c[1], s, decay(t));
     }
 
     /**
@@ -130,8 +129,8 @@ public final class FreeSpaceKernel1D {
         if (s == null || s.collapsed) {
             return x == centre(t) && velocity != 0 ? velocity * Double.POSITIVE_INFINITY : 0.0;
         }
-        final double xi = x - centre(t);
-        return flux(xi, s, decayExponent(t));
+        final double[] c = Spread.centre(source, velocity, retardation, t);
+        return flux(x, c[0], c[1], s, decay(t));
     }
 
     /**
@@ -151,18 +150,17 @@ public final class FreeSpaceKernel1D {
             }
             return;
         }
-        final double c = centre(t);
-        final double decay = decayExponent(t);
-        final double high = s.high;
-        final double low = s.low;
+        final double[] c = Spread.centre(source, velocity, retardation, t);
+        final double ch = c[0];
+        final double cl = c[1];
+        final double[] decay = decay(t);
+        final double dh = decay[0];
+        final double dl = decay[1];
         final double norm = s.norm;
         for (int i = 0; i < x.length; i++) {
-            // value(ξ, s, decay) written out: ξ²·R/(4Dt) in double-double, then the scaled exp
-            final double xi = Checks.finite("x", x[i]) - c;
-            final double p = xi * xi;
-            final double qh = p * high;
-            final double ql = Math.fma(p, high, -qh) + (p * low + Math.fma(xi, xi, -p) * high);
-            out[i] = ScaledExp.valueOfSplit(norm, decay, qh, ql);
+            final double xi = Checks.finite("x", x[i]);
+            final double qh = s.exponentHigh(xi, ch, cl);
+            out[i] = ScaledExp.valueOfSplit(norm, dh, qh, s.exponentLow(xi, ch, cl, qh) - dl);
         }
     }
 
@@ -177,11 +175,11 @@ public final class FreeSpaceKernel1D {
     public void gradient(double[] x, double t, double[] out) {
         checkArrays(x, out);
         final Spread s = spread(t);
-        final double c = centre(t);
-        final double decay = decayExponent(t);
+        final double[] c = Spread.centre(source, velocity, retardation, t);
+        final double[] decay = decay(t);
         for (int i = 0; i < x.length; i++) {
-            final double xi = Checks.finite("x", x[i]) - c;
-            out[i] = s == null || s.collapsed ? 0.0 : gradient(xi, s, decay);
+            final double xi = Checks.finite("x", x[i]);
+            out[i] = s == null || s.collapsed ? 0.0 : gradient(xi, c[0], c[1], s, decay);
         }
     }
 
@@ -202,35 +200,33 @@ public final class FreeSpaceKernel1D {
             }
             return;
         }
-        final double c = centre(t);
-        final double decay = decayExponent(t);
+        final double[] c = Spread.centre(source, velocity, retardation, t);
+        final double[] decay = decay(t);
         for (int i = 0; i < x.length; i++) {
-            final double xi = Checks.finite("x", x[i]) - c;
-            out[i] = flux(xi, s, decay);
+            out[i] = flux(Checks.finite("x", x[i]), c[0], c[1], s, decay);
         }
     }
 
-    private static double value(double xi, Spread s, double decay) {
-        return scaled(xi, s, decay, 1.0);
-    }
-
     /**
-     * Returns factor × G. The factor enters the multiplier of the exponential, so that a
-     * gradient or flux that is a normal double is not formed from a subnormal G.
+     * Returns factor × G at x, for the centre ch + cl. The factor enters the multiplier of the
+     * exponential, so that a gradient or flux that is a normal double is not formed from a
+     * subnormal G; the distance x − centre is carried in double-double.
      */
-    private static double scaled(double xi, Spread s, double decay, double factor) {
-        final double qh = s.exponentHigh(xi);
-        return ScaledExp.valueOfSplit(s.norm * factor, decay, qh, s.exponentLow(xi, qh));
+    private static double scaled(double x, double ch, double cl, Spread s, double[] decay,
+                                 double factor) {
+        final double qh = s.exponentHigh(x, ch, cl);
+        return ScaledExp.valueOfSplit(s.norm * factor, decay[0], qh,
+            s.exponentLow(x, ch, cl, qh) - decay[1]);
     }
 
-    private static double gradient(double xi, Spread s, double decay) {
+    private static double gradient(double x, double ch, double cl, Spread s, double[] decay) {
         // ∂G/∂x = −2ξ·R/(4Dt)·G
-        return scaled(xi, s, decay, -2 * xi * s.high);
+        return scaled(x, ch, cl, s, decay, -2 * ((x - ch) - cl) * s.high);
     }
 
-    private double flux(double xi, Spread s, double decay) {
+    private double flux(double x, double ch, double cl, Spread s, double[] decay) {
         // v·G − D·∂G/∂x = G·(v + 2D·ξ·R/(4Dt))
-        return scaled(xi, s, decay, velocity + 2 * dispersion * xi * s.high);
+        return scaled(x, ch, cl, s, decay, velocity + 2 * dispersion * ((x - ch) - cl) * s.high);
     }
 
     /** Returns the spread at t, or null at t = 0; validates t. */
@@ -240,11 +236,12 @@ public final class FreeSpaceKernel1D {
     }
 
     private double centre(double t) {
-        return Math.fma(retardedVelocity, t, source);
+        return Spread.centre(source, velocity, retardation, t)[0];
     }
 
-    private double decayExponent(double t) {
-        return -decayPerRetardation * t;
+    /** −μt/R in double-double. */
+    private double[] decay(double t) {
+        return Spread.decay(decayRate, retardation, t);
     }
 
     private static void checkArrays(double[] x, double[] out) {

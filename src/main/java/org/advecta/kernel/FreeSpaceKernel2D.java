@@ -42,8 +42,7 @@ public final class FreeSpaceKernel2D {
     private final double dL;
     private final double dT;
     private final double retardation;
-    private final double retardedVelocity;
-    private final double decayPerRetardation;
+    private final double decayRate;
 
     private FreeSpaceKernel2D(TransportParameters p, double x0, double y0) {
         this.x0 = x0;
@@ -52,8 +51,7 @@ public final class FreeSpaceKernel2D {
         this.dL = p.dispersion();
         this.dT = p.transverseDispersion();
         this.retardation = p.retardation();
-        this.retardedVelocity = p.retardedVelocity();
-        this.decayPerRetardation = p.decayRate() / p.retardation();
+        this.decayRate = p.decayRate();
     }
 
     /**
@@ -222,13 +220,19 @@ public final class FreeSpaceKernel2D {
         private final Spread sx;
         private final Spread sy;
         private final double centreX;
+        private final double centreLow;
         private final double decay;
+        private final double decayLow;
         private final double norm;
         private final boolean limit;
 
         Frame(double t) {
-            this.centreX = Math.fma(retardedVelocity, t, x0);
-            this.decay = -decayPerRetardation * t;
+            final double[] c = Spread.centre(x0, velocity, retardation, t);
+            this.centreX = c[0];
+            this.centreLow = c[1];
+            final double[] d = Spread.decay(decayRate, retardation, t);
+            this.decay = d[0];
+            this.decayLow = d[1];
             if (t == 0) {
                 this.sx = null;
                 this.sy = null;
@@ -251,11 +255,15 @@ public final class FreeSpaceKernel2D {
 
         /** factor × G, the factor in the exponential's multiplier (no subnormal G first). */
         private double scaled(double x, double y, double factor) {
-            return Spread.gaussian(norm * factor, decay, sx, x - centreX, sy, y - y0);
+            final double hx = sx.exponentHigh(x, centreX, centreLow);
+            final double hy = sy.exponentHigh(y, y0, 0.0);
+            return Spread.combine(norm * factor, decay, hx,
+                sx.exponentLow(x, centreX, centreLow, hx), hy,
+                sy.exponentLow(y, y0, 0.0, hy) - decayLow);
         }
 
         double gradientX(double x, double y) {
-            return limit ? 0.0 : scaled(x, y, -2 * (x - centreX) * sx.high);
+            return limit ? 0.0 : scaled(x, y, -2 * ((x - centreX) - centreLow) * sx.high);
         }
 
         double gradientY(double x, double y) {
@@ -268,7 +276,7 @@ public final class FreeSpaceKernel2D {
                     ? velocity * Double.POSITIVE_INFINITY : 0.0;
             }
             // v·G − D_L·∂G/∂x = G·(v + 2 D_L ξ R/(4 D_L t))
-            return scaled(x, y, velocity + 2 * dL * (x - centreX) * sx.high);
+            return scaled(x, y, velocity + 2 * dL * ((x - centreX) - centreLow) * sx.high);
         }
     }
 }

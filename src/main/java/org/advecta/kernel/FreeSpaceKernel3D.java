@@ -40,8 +40,7 @@ public final class FreeSpaceKernel3D {
     private final double dT;
     private final double dV;
     private final double retardation;
-    private final double retardedVelocity;
-    private final double decayPerRetardation;
+    private final double decayRate;
 
     private FreeSpaceKernel3D(TransportParameters p, double x0, double y0, double z0) {
         this.x0 = x0;
@@ -52,8 +51,7 @@ public final class FreeSpaceKernel3D {
         this.dT = p.transverseDispersion();
         this.dV = p.verticalDispersion();
         this.retardation = p.retardation();
-        this.retardedVelocity = p.retardedVelocity();
-        this.decayPerRetardation = p.decayRate() / p.retardation();
+        this.decayRate = p.decayRate();
     }
 
     /**
@@ -279,13 +277,19 @@ public final class FreeSpaceKernel3D {
     private final class Frame {
         private final Spread[] spreads;
         private final double centreX;
+        private final double centreLow;
         private final double decay;
+        private final double decayLow;
         private final double norm;
         private final boolean limit;
 
         Frame(double t) {
-            this.centreX = Math.fma(retardedVelocity, t, x0);
-            this.decay = -decayPerRetardation * t;
+            final double[] c = Spread.centre(x0, velocity, retardation, t);
+            this.centreX = c[0];
+            this.centreLow = c[1];
+            final double[] d = Spread.decay(decayRate, retardation, t);
+            this.decay = d[0];
+            this.decayLow = d[1];
             if (t == 0) {
                 this.spreads = null;
                 this.limit = true;
@@ -312,15 +316,22 @@ public final class FreeSpaceKernel3D {
 
         /** factor × G, the factor in the exponential's multiplier (no subnormal G first). */
         private double scaled(double x, double y, double z, double factor) {
-            return Spread.gaussian(norm * factor, decay, spreads[0], x - centreX, spreads[1],
-                y - y0, spreads[2], z - z0);
+            final Spread sx = spreads[0];
+            final Spread sy = spreads[1];
+            final Spread sz = spreads[2];
+            final double hx = sx.exponentHigh(x, centreX, centreLow);
+            final double hy = sy.exponentHigh(y, y0, 0.0);
+            final double hz = sz.exponentHigh(z, z0, 0.0);
+            return Spread.combine(norm * factor, decay, hx,
+                sx.exponentLow(x, centreX, centreLow, hx), hy, sy.exponentLow(y, y0, 0.0, hy),
+                hz, sz.exponentLow(z, z0, 0.0, hz) - decayLow);
         }
 
         double gradient(int axis, double x, double y, double z) {
             if (limit) {
                 return 0.0;
             }
-            final double d = axis == 0 ? x - centreX : axis == 1 ? y - y0 : z - z0;
+            final double d = axis == 0 ? (x - centreX) - centreLow : axis == 1 ? y - y0 : z - z0;
             return scaled(x, y, z, -2 * d * spreads[axis].high);
         }
 
@@ -330,7 +341,8 @@ public final class FreeSpaceKernel3D {
                     ? velocity * Double.POSITIVE_INFINITY : 0.0;
             }
             // v·G − D_L·∂G/∂x = G·(v + 2 D_L ξ R/(4 D_L t))
-            return scaled(x, y, z, velocity + 2 * dL * (x - centreX) * spreads[0].high);
+            return scaled(x, y, z,
+                velocity + 2 * dL * ((x - centreX) - centreLow) * spreads[0].high);
         }
     }
 }

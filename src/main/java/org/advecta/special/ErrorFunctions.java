@@ -92,9 +92,21 @@ public final class ErrorFunctions {
      * @return erf(a) − erf(b)
      */
     public static double erfDifference(double a, double b) {
+        if (Math.abs(a) < SMALL_ARGUMENT && Math.abs(b) < SMALL_ARGUMENT) {
+            // erf(a) − erf(b) = (2/√π)(a − b)(1 − (a² + ab + b²)/3 + O(a⁴)): the difference of
+            // the arguments is exact or correctly rounded, while two rounded erf values near
+            // 1e-300 differ by whole multiples of their ulp.
+            return TWO_OVER_SQRT_PI * (a - b) * (1 - (a * a + a * b + b * b) / 3);
+        }
         // Commons Numbers' ErfDifference.value(x1, x2) is erf(x2) − erf(x1).
         return ErfDifference.value(b, a);
     }
+
+    /**
+     * Below this, the two-term series of {@link #erfDifference} is exact to double precision:
+     * the next term is (a⁴ + a³b + a²b² + ab³ + b⁴)/10 &lt; 2⁻⁶⁰ relative.
+     */
+    private static final double SMALL_ARGUMENT = 0x1.0p-16;
 
     /**
      * The difference erf(m + h) − erf(m − h) over an interval given by its centre m and
