@@ -59,8 +59,17 @@ final class ErfcxIntegrals {
      * without cancellation.
      */
     static double j(double a, double b) {
-        final double m = 0.5 * a + 0.5 * b;
-        final double h = 0.5 * b - 0.5 * a;
+        return jCentred(0.5 * a + 0.5 * b, 0.5 * b - 0.5 * a);
+    }
+
+    /**
+     * J(m − h, m + h) from the centre and half-width, which callers can often form more
+     * accurately than the ends (a half-width x/L far below the centre vt/(RL) would lose its
+     * digits in m ± h).
+     */
+    static double jCentred(double m, double h) {
+        final double a = m - h;
+        final double b = m + h;
         if (narrow(m, h)) {
             return ScaledExp.value(integralOfPhi(m, h), 0.0, a);
         }
@@ -98,16 +107,16 @@ final class ErfcxIntegrals {
     }
 
     /**
-     * exp(e)·J(a, b) for a ≤ b, without overflow of exp(e) or underflow of J first:
+     * exp(e)·J(m − h, m + h) for h ≥ 0, without overflow of exp(e) or underflow of J first:
      * exp(e)·J = exp(e − a²)·∫_a^b φ, and ∫_a^b φ = (erfcx(a) − erfcx(b))/2 is an ordinary
      * number unless a &lt; −26 (where erfcx(a) overflows but J ≈ erfc(a)/2 ≈ 1).
      */
-    static double expTimesJ(double e, double a, double b) {
+    static double expTimesJ(double e, double m, double h) {
+        final double a = m - h;
+        final double b = m + h;
         if (a < ERFCX_OVERFLOW) {
-            return Math.exp(e) * j(a, b);
+            return Math.exp(e) * jCentred(m, h);
         }
-        final double m = 0.5 * a + 0.5 * b;
-        final double h = 0.5 * b - 0.5 * a;
         final double integral = narrow(m, h) ? integralOfPhi(m, h)
             : 0.5 * (ErrorFunctions.erfcx(a) - ErrorFunctions.erfcx(b));
         return ScaledExp.value(integral, e, a);

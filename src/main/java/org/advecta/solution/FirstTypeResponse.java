@@ -3,7 +3,6 @@ package org.advecta.solution;
 import org.advecta.internal.ScaledExp;
 import org.advecta.internal.Spread;
 import org.advecta.special.ErrorFunctions;
-import org.advecta.special.ExpErfc;
 
 /**
  * The unit response of the first-type inlet c(0, t) = 1 on a clean half-line:
@@ -25,17 +24,20 @@ final class FirstTypeResponse implements UnitResponse {
     private final double d;
     private final double r;
     private final double mu;
+    /** The medium's decay coefficient (μ differs from it by λR for an exponential input). */
+    private final double muTrue;
     private final double u;
     /** v − u, without cancellation. */
     private final double vMinusU;
     /** v − |v|, for the decay-free response R₀ (u₀ = |v|). */
     private final double vMinusU0;
 
-    FirstTypeResponse(double v, double d, double r, double mu) {
+    FirstTypeResponse(double v, double d, double r, double mu, double muTrue) {
         this.v = v;
         this.d = d;
         this.r = r;
         this.mu = mu;
+        this.muTrue = muTrue;
         final double radicand = Math.fma(4 * mu, d, v * v);
         this.u = Math.sqrt(radicand);
         if (v >= 0) {
@@ -51,13 +53,34 @@ final class FirstTypeResponse implements UnitResponse {
         return vMinusU * x / (2 * d);
     }
 
+    /**
+     * The exponent of the erfcx terms: s₁ + shift − A_u² = −A_v² − μt/R with the medium's
+     * own μ (since B_u² − A_u² = ux/D and u² = v² + 4(μ − λR)D). Formed this way it carries no
+     * cancellation between s₁ and −λt, both large for a fast exponential input.
+     */
+    private double trueDecay(double t) {
+        return -muTrue / r * t;
+    }
+
+    /** factor·exp(s₁ + shift)·erfc(A_u), as exp(−A_v² − μt/R)·erfcx(A_u) when A_u ≥ 0. */
+    private double firstTerm(double factor, double x, double t, double shift, Spread s,
+                             double au) {
+        if (au >= 0) {
+            return ScaledExp.value(factor * ErrorFunctions.erfcx(au), trueDecay(t),
+                s.scaled(x - v / r * t));
+        }
+        // erfc(A_u) is in (1, 2]; s₁ + shift ≤ 0 unless an input grows
+        return ScaledExp.value(factor * ErrorFunctions.erfc(au), s1(x) + shift, 0.0);
+    }
+
     @Override
     public double value(double x, double t, double shift) {
         final Spread s = Spread.of(d, r, t);
         final double au = s.scaled(x - u / r * t);
         final double bu = s.scaled(x + u / r * t);
-        final double e = s1(x) + shift;
-        return 0.5 * (ExpErfc.value(e, au) + ScaledExp.value(ErrorFunctions.erfcx(bu), e, au));
+        final double av = s.scaled(x - v / r * t);
+        return firstTerm(0.5, x, t, shift, s, au)
+            + ScaledExp.value(0.5 * ErrorFunctions.erfcx(bu), trueDecay(t), av);
     }
 
     @Override
@@ -67,11 +90,11 @@ final class FirstTypeResponse implements UnitResponse {
         final Spread s = Spread.of(d, r, t);
         final double au = s.scaled(x - u / r * t);
         final double bu = s.scaled(x + u / r * t);
+        final double av = s.scaled(x - v / r * t);
         final double avPlusBu = s.scaled(2 * x - vMinusU / r * t);
-        final double e = s1(x) + shift;
         final double bracket = avPlusBu * ErrorFunctions.erfcx(bu) + 2 * ErfcxIntegrals.phi(bu);
-        return vMinusU / (4 * d) * ExpErfc.value(e, au)
-            - ScaledExp.value(s.inverseLength() * bracket, e, au);
+        return firstTerm(vMinusU / (4 * d), x, t, shift, s, au)
+            - ScaledExp.value(s.inverseLength() * bracket, trueDecay(t), av);
     }
 
     @Override
@@ -80,13 +103,55 @@ final class FirstTypeResponse implements UnitResponse {
     }
 
     @Override
-    public double gradientRemainder(double x, double t) {
-        // k·F − F_x = (2e^{s1 − A_u²}/L)·[φ(B_u) + Q·erfcx(B_u)],  Q = x/L
+    public double complementGradient(double x, double t) {
+        // R(∞) − R = e^{s1}·J(a, b) = e^{−A_v² − μt/R}·∫_a^b φ, a = P_u − Q, b = P_u + Q, so
+        // ∂/∂x = (e^{−A_v² − μt/R}/L)·[φ(a) + φ(b) − 2A_v·∫_a^b φ]: the exponent's own
+        // x-derivative −2A_v/L is applied directly (k + 2a/L nearly cancel otherwise).
         final Spread s = Spread.of(d, r, t);
+        final double m = s.scaled(u / r * t);
+        final double h = s.scaled(x);
+        final double a = m - h;
+        final double b = m + h;
+        if (a < 0) {
+            return steadyRate() * complement(x, t) + gradientRemainder(x, t, s);
+        }
+        final double integral = ErfcxIntegrals.narrow(m, h) ? ErfcxIntegrals.integralOfPhi(m, h)
+            : 0.5 * (ErrorFunctions.erfcx(a) - ErrorFunctions.erfcx(b));
+        final double av = s.scaled(x - v / r * t);
+        final double bracket = ErfcxIntegrals.phi(a) + ErfcxIntegrals.phi(b) - 2 * av * integral;
+        return ScaledExp.value(s.inverseLength() * bracket, trueDecay(t), av);
+    }
+
+    /** k·F − F_x = (2e^{s1 − A_u²}/L)·[φ(B_u) + Q·erfcx(B_u)],  Q = x/L. */
+    private double gradientRemainder(double x, double t, Spread s) {
         final double au = s.scaled(x - u / r * t);
         final double bu = s.scaled(x + u / r * t);
         final double bracket = ErfcxIntegrals.phi(bu) + s.scaled(x) * ErrorFunctions.erfcx(bu);
         return ScaledExp.value(2 * s.inverseLength() * bracket, s1(x), au);
+    }
+
+    /**
+     * Returns exp(shift)·(R − (D/v)·∂R/∂x) for v &lt; 0, where the two terms nearly cancel
+     * (the steady state e^{s1} has exactly zero flux-averaged value when μ = 0). Rewritten
+     * with B·erfcx(B) + φ(B) = 1/√π as two terms of one sign:
+     * <pre>
+     * R_f = −(v+u)/(4|v|)·e^{s1}erfc(A_u)
+     *       − e^{−A_v² − μt/R}/(4|P_v|)·[(P_u − |P_v| + 2Q)·erfcx(B_u) + 2φ(B_u)]
+     * </pre>
+     * with P = ut/(RL), Q = x/L, v + u = 4μD/(u − v) ≥ 0.
+     */
+    double fluxAveragedUpstream(double x, double t, double shift) {
+        final Spread s = Spread.of(d, r, t);
+        final double au = s.scaled(x - u / r * t);
+        final double bu = s.scaled(x + u / r * t);
+        final double av = s.scaled(x - v / r * t);
+        final double vPlusU = 4 * mu * d / (u - v);
+        final double pv = s.scaled(-v / r * t);
+        final double puMinusPv = s.scaled(vPlusU / r * t);
+        final double bracket = (puMinusPv + 2 * s.scaled(x)) * ErrorFunctions.erfcx(bu)
+            + 2 * ErfcxIntegrals.phi(bu);
+        return firstTerm(-vPlusU / (4 * -v), x, t, shift, s, au)
+            - ScaledExp.value(bracket / (4 * pv), trueDecay(t), av);
     }
 
     @Override
@@ -97,10 +162,9 @@ final class FirstTypeResponse implements UnitResponse {
     @Override
     public double complement(double x, double t) {
         // F(∞) − F(t) = e^{s1}·½[erfc(−A_u) − e^{−A_u²}erfcx(B_u)] = e^{s1}·J(−A_u, B_u)
+        // −A_u and B_u are P_u ∓ Q with P_u = ut/(RL), Q = x/L: pass those, not x ± ut/R
         final Spread s = Spread.of(d, r, t);
-        final double au = s.scaled(x - u / r * t);
-        final double bu = s.scaled(x + u / r * t);
-        return Math.exp(s1(x)) * ErfcxIntegrals.j(-au, bu);
+        return Math.exp(s1(x)) * ErfcxIntegrals.jCentred(s.scaled(u / r * t), s.scaled(x));
     }
 
     @Override
@@ -127,14 +191,13 @@ final class FirstTypeResponse implements UnitResponse {
         // two non-negative terms.
         final Spread s = Spread.of(d, r, t);
         final double u0 = Math.abs(v);
-        final double a0 = s.scaled(x - u0 / r * t);
-        final double b0 = s.scaled(x + u0 / r * t);
         final double s10 = vMinusU0 * x / (2 * d);
-        return -Math.expm1(s10) + Math.exp(s10) * ErfcxIntegrals.j(-a0, b0);
+        return -Math.expm1(s10)
+            + Math.exp(s10) * ErfcxIntegrals.jCentred(s.scaled(u0 / r * t), s.scaled(x));
     }
 
     @Override
     public double flushGradient(double x, double t) {
-        return -new FirstTypeResponse(v, d, r, 0.0).gradient(x, t, 0.0);
+        return -new FirstTypeResponse(v, d, r, 0.0, 0.0).gradient(x, t, 0.0);
     }
 }

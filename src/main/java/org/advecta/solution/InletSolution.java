@@ -48,11 +48,14 @@ abstract class InletSolution extends AbstractSolution1D {
                         + " u = sqrt(v^2 + 4(mu - lambda R)D) is imaginary)");
             }
         }
-        this.response = newResponse(velocity, dispersion, retardation, effective);
+        this.response = newResponse(velocity, dispersion, retardation, effective, mu);
     }
 
-    /** Creates the family's unit response for decay coefficient mu. */
-    abstract UnitResponse newResponse(double v, double d, double r, double mu);
+    /**
+     * Creates the family's unit response for decay coefficient mu (μ − λR for an exponential
+     * input), where the medium's own decay coefficient is muTrue.
+     */
+    abstract UnitResponse newResponse(double v, double d, double r, double mu, double muTrue);
 
     @Override
     final double valueAt(double x, double t) {
@@ -130,9 +133,8 @@ abstract class InletSolution extends AbstractSolution1D {
         if (response.value(x, t, 0.0) <= 0.5 * response.steady(x)) {
             return response.gradient(x, t, 0.0) - response.gradient(x, t1, 0.0);
         }
-        // after the front: both gradients are near the steady state's; use the remainders
-        return response.steadyRate() * pulse(x, t) + response.gradientRemainder(x, t1)
-            - response.gradientRemainder(x, t);
+        // after the front both gradients are near the steady state's: use the complements'
+        return response.complementGradient(x, t1) - response.complementGradient(x, t);
     }
 
     private boolean narrowInTime(double x, double t1, double t) {

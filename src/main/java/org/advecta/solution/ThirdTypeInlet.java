@@ -107,8 +107,8 @@ public final class ThirdTypeInlet extends InletSolution {
     }
 
     @Override
-    UnitResponse newResponse(double v, double d, double r, double mu) {
-        return new ThirdTypeResponse(v, d, r, mu);
+    UnitResponse newResponse(double v, double d, double r, double mu, double muTrue) {
+        return new ThirdTypeResponse(v, d, r, mu, muTrue);
     }
 
     @Override

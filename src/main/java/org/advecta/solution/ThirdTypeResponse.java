@@ -28,15 +28,18 @@ final class ThirdTypeResponse implements UnitResponse {
     private final double d;
     private final double r;
     private final double mu;
+    /** The medium's decay coefficient (μ differs from it by λR for an exponential input). */
+    private final double muTrue;
     private final double u;
     /** v − u, without cancellation. */
     private final double vMinusU;
 
-    ThirdTypeResponse(double v, double d, double r, double mu) {
+    ThirdTypeResponse(double v, double d, double r, double mu, double muTrue) {
         this.v = v;
         this.d = d;
         this.r = r;
         this.mu = mu;
+        this.muTrue = muTrue;
         this.u = Math.sqrt(Math.fma(4 * mu, d, v * v));
         this.vMinusU = -4 * mu * d / (v + u);
     }
@@ -50,6 +53,9 @@ final class ThirdTypeResponse implements UnitResponse {
         final double pv;
         final double q;
         final double s1;
+        final double av;
+        /** −μt/R with the medium's own μ: s₁ + shift − A_u² = −A_v² − μt/R. */
+        final double decay;
 
         Point(double x, double t) {
             s = Spread.of(d, r, t);
@@ -59,17 +65,34 @@ final class ThirdTypeResponse implements UnitResponse {
             pv = s.scaled(v / r * t);
             q = s.scaled(x);
             s1 = vMinusU * x / (2 * d);
+            av = s.scaled(x - v / r * t);
+            decay = -muTrue / r * t;
         }
     }
 
     @Override
     public double value(double x, double t, double shift) {
         final Point p = new Point(x, t);
-        final double e = p.s1 + shift;
         final double m = ErfcxIntegrals.meanOfPhi(p.bv, p.bu);
-        final double first = 2 * ErfcxIntegrals.expTimesJ(e, p.au, p.bu);
-        final double second = ScaledExp.value(4 * p.pv * m, e, p.au);
+        // 2e^{s1+shift}·J(A_u, B_u): centre Q = x/L, half-width P_u = ut/(RL)
+        final double first = 2 * expTimesJ(p, p.s1 + shift, p.q, p.s.scaled(u / r * t));
+        final double second = ScaledExp.value(4 * p.pv * m, p.decay, p.av);
         return v / (u + v) * (first + second);
+    }
+
+    /**
+     * exp(e)·J(m − h, m + h) where e − (m − h)² = −A_v² − μt/R: the exponential factors are
+     * applied as that exponent, without the cancellation of e = s₁ − λt.
+     */
+    private static double expTimesJ(Point p, double e, double m, double h) {
+        final double a = m - h;
+        if (a < 0) {
+            return ErfcxIntegrals.expTimesJ(e, m, h);
+        }
+        final double b = m + h;
+        final double integral = ErfcxIntegrals.narrow(m, h) ? ErfcxIntegrals.integralOfPhi(m, h)
+            : 0.5 * (ErrorFunctions.erfcx(a) - ErrorFunctions.erfcx(b));
+        return ScaledExp.value(integral, p.decay, p.av);
     }
 
     @Override
@@ -78,10 +101,13 @@ final class ThirdTypeResponse implements UnitResponse {
     }
 
     @Override
-    public double gradientRemainder(double x, double t) {
-        // k·T − T_x = −v/(u+v)·(4/L)·e^{s1 − A_u²}·inner
+    public double complementGradient(double x, double t) {
+        // ∂/∂x (T(∞) − T) = k·(T(∞) − T) + (k·T − T_x), and k·T − T_x =
+        // −v/(u+v)·(4/L)·e^{−A_v² − μt/R}·inner ≥ 0
         final Point p = new Point(x, t);
-        return -v / (u + v) * ScaledExp.value(4 * p.s.inverseLength() * inner(p, t), p.s1, p.au);
+        final double remainder = -v / (u + v)
+            * ScaledExp.value(4 * p.s.inverseLength() * inner(p, t), p.decay, p.av);
+        return steadyRate() * complement(x, t) + remainder;
     }
 
     /** The bracket of the gradient (see {@link #gradient}); ≤ 0. */
@@ -103,9 +129,8 @@ final class ThirdTypeResponse implements UnitResponse {
         // collects −P_u erfcx(B_u) − 2P_v A_u M − P_v M_ψ so that its leading terms share
         // a sign (erfcx = ψ + 2sφ, A_u + B_u = 2Q).
         final Point p = new Point(x, t);
-        final double e = p.s1 + shift;
         return vMinusU / (2 * d) * value(x, t, shift)
-            + v / (u + v) * ScaledExp.value(4 * p.s.inverseLength() * inner(p, t), e, p.au);
+            + v / (u + v) * ScaledExp.value(4 * p.s.inverseLength() * inner(p, t), p.decay, p.av);
     }
 
     @Override

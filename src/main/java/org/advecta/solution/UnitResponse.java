@@ -23,11 +23,11 @@ interface UnitResponse {
     double steadyRate();
 
     /**
-     * Returns K(x, t) = k·R − ∂R/∂x, written without cancellation, so that the gradient of
-     * a pulse after the front has passed, R_x(t) − R_x(t − t₀) = k·(R(t) − R(t − t₀))
-     * + K(t − t₀) − K(t), needs no difference of nearly equal gradients.
+     * Returns ∂/∂x [R(x, ∞) − R(x, t)] (for μ_e ≥ 0), so that the gradient of a pulse after
+     * the front has passed, R_x(t) − R_x(t − t₀), is a difference of two such terms of
+     * different size instead of two nearly equal gradients.
      */
-    double gradientRemainder(double x, double t);
+    double complementGradient(double x, double t);
 
     /** Returns ∂R/∂t, the response to a unit impulse of input at t = 0. */
     double density(double x, double t);
