@@ -109,6 +109,12 @@ public final class FirstTypeInlet extends InletSolution {
     }
 
     @Override
+    double valueAt(double x, double t) {
+        // the inlet holds the input exactly: c(0, t) = g(t) (the formula gives it to 1 ulp)
+        return x == 0 ? input.valueAt(t) : super.valueAt(x, t);
+    }
+
+    @Override
     UnitResponse newResponse(double v, double d, double r, double mu, double muTrue) {
         return new FirstTypeResponse(v, d, r, mu, muTrue);
     }

@@ -72,27 +72,35 @@ final class ThirdTypeResponse implements UnitResponse {
 
     @Override
     public double value(double x, double t, double shift) {
-        final Point p = new Point(x, t);
+        return valueTimes(1.0, new Point(x, t), t, shift);
+    }
+
+    /**
+     * factor × value, the factor applied inside the exponentials' multipliers so that a
+     * normal result is never formed from a subnormal one.
+     */
+    private double valueTimes(double factor, Point p, double t, double shift) {
         final double m = ErfcxIntegrals.meanOfPhi(p.bv, p.bu);
+        final double f = factor * v / (u + v);
         // 2e^{s1+shift}·J(A_u, B_u): centre Q = x/L, half-width P_u = ut/(RL)
-        final double first = 2 * expTimesJ(p, p.s1 + shift, p.q, p.s.scaled(u / r * t));
-        final double second = ScaledExp.value(4 * p.pv * m, p.decay, p.av);
-        return v / (u + v) * (first + second);
+        final double first = expTimesJ(p, 2 * f, p.s1 + shift, p.q, p.s.scaled(u / r * t));
+        final double second = ScaledExp.value(f * 4 * p.pv * m, p.decay, p.av);
+        return first + second;
     }
 
     /**
      * exp(e)·J(m − h, m + h) where e − (m − h)² = −A_v² − μt/R: the exponential factors are
      * applied as that exponent, without the cancellation of e = s₁ − λt.
      */
-    private static double expTimesJ(Point p, double e, double m, double h) {
+    private static double expTimesJ(Point p, double factor, double e, double m, double h) {
         final double a = m - h;
         if (a < 0) {
-            return ErfcxIntegrals.expTimesJ(e, m, h);
+            return factor * ErfcxIntegrals.expTimesJ(e, m, h);
         }
         final double b = m + h;
         final double integral = ErfcxIntegrals.narrow(m, h) ? ErfcxIntegrals.integralOfPhi(m, h)
             : 0.5 * (ErrorFunctions.erfcx(a) - ErrorFunctions.erfcx(b));
-        return ScaledExp.value(integral, p.decay, p.av);
+        return ScaledExp.value(factor * integral, p.decay, p.av);
     }
 
     @Override
@@ -129,7 +137,7 @@ final class ThirdTypeResponse implements UnitResponse {
         // collects −P_u erfcx(B_u) − 2P_v A_u M − P_v M_ψ so that its leading terms share
         // a sign (erfcx = ψ + 2sφ, A_u + B_u = 2Q).
         final Point p = new Point(x, t);
-        return vMinusU / (2 * d) * value(x, t, shift)
+        return valueTimes(vMinusU / (2 * d), p, t, shift)
             + v / (u + v) * ScaledExp.value(4 * p.s.inverseLength() * inner(p, t), p.decay, p.av);
     }
 

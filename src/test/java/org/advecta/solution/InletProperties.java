@@ -168,7 +168,10 @@ class InletProperties {
             @ForAll @DoubleRange(min = -3, max = 2) double logT) {
         final double t = Math.pow(10, logT);
         final FirstTypeInlet c = FirstTypeInlet.of(params(v, logD, r, 0), InletInput.constant(1));
-        assertTrue(c.value(x, t * 1.01) >= c.value(x, t),
+        // monotone to within rounding: where c has stopped changing (c ≈ 1 near the inlet)
+        // two evaluations may differ by an ulp either way
+        final double earlier = c.value(x, t);
+        assertTrue(c.value(x, t * 1.01) >= earlier - 2 * Math.ulp(earlier),
             "c must not decrease in time for a constant input into clean ground");
     }
 
