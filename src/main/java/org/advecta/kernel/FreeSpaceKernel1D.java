@@ -149,8 +149,20 @@ public final class FreeSpaceKernel1D {
             return;
         }
         final Frame f = frame(s, t);
+        // scaled(x, f, 1.0) written out with its constants in locals: the bulk path is the
+        // exponential plus four operations
+        final double ch = f.ch;
+        final double cl = f.cl;
+        final double high = s.high;
+        final double bulk = f.bulkScale;
+        // bulkScale = 0 sends every point to the tail path: the same results, one branch
+        final double limit = bulk != 0 ? BULK_EXPONENT : -1;
         for (int i = 0; i < x.length; i++) {
-            out[i] = scaled(Checks.finite("x", x[i]), f, 1.0);
+            final double xv = x[i];
+            final double xi = (xv - ch) - cl;
+            final double qh = xi * xi * high;
+            // a NaN or infinite x gives qh = NaN or ∞ and is rejected in tail()
+            out[i] = qh < limit ? bulk * Math.exp(-qh) : tail(xv, f, 1.0);
         }
     }
 
@@ -253,6 +265,7 @@ public final class FreeSpaceKernel1D {
 
     /** The far-tail path of {@link #scaled}, kept out of line so the bulk path inlines. */
     private static double tail(double x, Frame f, double factor) {
+        Checks.finite("x", x);
         final Spread s = f.s;
         final double qh = s.exponentHigh(x, f.ch, f.cl);
         return ScaledExp.valueOfSplit(s.norm * factor, f.dh, qh,

@@ -61,24 +61,6 @@ public final class FirstTypeInlet extends InletSolution {
     }
 
     /**
-     * Returns the input history.
-     *
-     * @return g
-     */
-    public InletInput input() {
-        return input;
-    }
-
-    /**
-     * Returns the initial concentration Cᵢ.
-     *
-     * @return Cᵢ
-     */
-    public double initialConcentration() {
-        return initial;
-    }
-
-    /**
      * Returns the flux-averaged concentration c − (D/v)·∂c/∂x. For v &lt; 0 (solute entering
      * against the flow) its two terms nearly cancel, and for constant and exponential inputs
      * it is evaluated from a rewritten closed form whose terms share a sign; for pulses with

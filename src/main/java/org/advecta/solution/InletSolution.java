@@ -52,6 +52,24 @@ abstract class InletSolution extends AbstractSolution1D {
     }
 
     /**
+     * Returns the input history.
+     *
+     * @return g
+     */
+    public InletInput input() {
+        return input;
+    }
+
+    /**
+     * Returns the initial concentration Cᵢ.
+     *
+     * @return Cᵢ
+     */
+    public double initialConcentration() {
+        return initial;
+    }
+
+    /**
      * Creates the family's unit response for decay coefficient mu (μ − λR for an exponential
      * input), where the medium's own decay coefficient is muTrue.
      */

@@ -76,24 +76,6 @@ public final class ThirdTypeInlet extends InletSolution {
     }
 
     /**
-     * Returns the input history.
-     *
-     * @return g
-     */
-    public InletInput input() {
-        return input;
-    }
-
-    /**
-     * Returns the initial concentration Cᵢ.
-     *
-     * @return Cᵢ
-     */
-    public double initialConcentration() {
-        return initial;
-    }
-
-    /**
      * Returns the flux-averaged concentration c − (D/v)·∂c/∂x, which for this problem is
      * exactly the resident concentration of the {@link FirstTypeInlet} with the same data.
      *

@@ -47,7 +47,7 @@ public final class ErrorFunctions {
      * for x above about 26.55 and rounds to 0 above about 27.23.
      *
      * <p>Accuracy: within 4 ULP of the exact result wherever the result is a normal double
-     * (measured: under 2), within 1 {@link Double#MIN_VALUE} where it is subnormal.
+     * (measured: 2.5 at most), within 1 {@link Double#MIN_VALUE} where it is subnormal.
      *
      * @param x the argument
      * @return erfc(x)
