@@ -19,16 +19,19 @@ import org.apache.commons.numbers.gamma.Erfcx;
  *
  * <p>The exponent a − b² is formed with an exact split of b² ({@link Math#fma}) and an exact
  * two-sum, so its rounding does not cost the hundreds of ULP that a plain {@code a - b*b}
- * does when a and b² are both large (Dekker 1971, Numer. Math. 18, 224–242). Where neither
- * factor can overflow or underflow (|a| ≤ 700, b &lt; 26) the plain product is used: each
- * factor is then accurate to a few ULP, and it is the cheapest form.
+ * does when a and b² are both large (Dekker 1971, Numer. Math. 18, 224–242). For b &lt; 1/2 and
+ * |a| ≤ 700 the plain product is used: erfc(b) is then near 1 and exp(a) a normal double,
+ * so it is accurate, and cheaper than erfcx, which needs exp(b²) there.
  */
 public final class ExpErfc {
 
     /** |a| up to this keeps exp(a) a normal double (ln MAX_VALUE ≈ 709.78). */
     private static final double SAFE_EXPONENT = 700;
-    /** b below this keeps erfc(b) a normal double (erfc(26) ≈ 5.7e-296, subnormal past 26.55). */
-    private static final double SAFE_ERFC = 26;
+    /**
+     * From here on the scaled form exp(a − b²)·erfcx(b) is used: one exponential instead of
+     * the two of exp(a)·erfc(b) (erfc computes exp(−b²) itself for b ≥ 1/2), and no overflow.
+     */
+    private static final double SCALED_FROM = 0.5;
 
     private ExpErfc() {
     }
@@ -41,7 +44,7 @@ public final class ExpErfc {
      * The result is +∞ only where the exact value exceeds {@link Double#MAX_VALUE}, and 0 only
      * where it is below half of {@link Double#MIN_VALUE}.
      *
-     * <p>Accuracy: within 4 ULP for |a| ≤ 700 and b &lt; 26 where the result is a normal double;
+     * <p>Accuracy: within 4 ULP for |a| ≤ 700 and b &lt; 1/2 where the result is a normal double;
      * elsewhere within max(16, 2κ) ULP of the exact result wherever it is a normal double,
      * where κ = |a| + |b·erfc′(b)/erfc(b)| ≈ |a| + 2b² is the condition number of the product
      * with respect to its arguments (a relative change δ in a alone moves the result by
@@ -52,9 +55,9 @@ public final class ExpErfc {
      * @return exp(a)·erfc(b)
      */
     public static double value(double a, double b) {
-        if (a >= -SAFE_EXPONENT && a <= SAFE_EXPONENT && b < SAFE_ERFC) {
-            // Both factors are normal doubles here (exp(±700) and erfc(b) ≥ erfc(26) ≈ 5.7e-296):
-            // the plain product is within 1 + 2.5 + 0.5 ULP and costs least.
+        if (b < SCALED_FROM && a >= -SAFE_EXPONENT && a <= SAFE_EXPONENT) {
+            // erfc(b) > 0.47 and exp(a) is a normal double: the plain product is within
+            // 1 + 1 + 0.5 ULP, and cheaper than erfcx, which itself needs exp(b²) here.
             return Math.exp(a) * Erfc.value(b);
         }
         if (!(Math.abs(a) < Double.POSITIVE_INFINITY)) {
