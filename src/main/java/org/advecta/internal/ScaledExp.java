@@ -79,57 +79,6 @@ public final class ScaledExp {
     }
 
     /**
-     * Returns {@code m × exp(s − w1² − w2²)}, with the same contract as
-     * {@link #value(double, double, double)}.
-     *
-     * @param m finite multiplier (its sign is the result's)
-     * @param s finite shift
-     * @param w1 first scaled distance
-     * @param w2 second scaled distance
-     * @return the product
-     */
-    public static double value(double m, double s, double w1, double w2) {
-        final double p1 = w1 * w1;
-        final double p2 = w2 * w2;
-        if (!(p1 + p2 < Double.POSITIVE_INFINITY)) {
-            return (w1 != w1 || w2 != w2) ? Double.NaN : Math.copySign(0.0, m);
-        }
-        double e = s - p1;
-        double bv = e - s;
-        double c = (s - (e - bv)) + (-p1 - bv) - Math.fma(w1, w1, -p1);
-        final double e2 = e - p2;
-        bv = e2 - e;
-        c += (e - (e2 - bv)) + (-p2 - bv) - Math.fma(w2, w2, -p2);
-        return finish(m, e2, c);
-    }
-
-    /**
-     * Returns {@code m × exp(s − w1² − w2² − w3²)}, with the same contract as
-     * {@link #value(double, double, double)}.
-     *
-     * @param m finite multiplier (its sign is the result's)
-     * @param s finite shift
-     * @param w1 first scaled distance
-     * @param w2 second scaled distance
-     * @param w3 third scaled distance
-     * @return the product
-     */
-    public static double value(double m, double s, double w1, double w2, double w3) {
-        final double p3 = w3 * w3;
-        if (!(p3 < Double.POSITIVE_INFINITY)) {
-            return w3 != w3 ? Double.NaN : Math.copySign(0.0, m);
-        }
-        // Fold the third square into the shift with its exact error carried separately.
-        final double pLow = Math.fma(w3, w3, -p3);
-        final double e = s - p3;
-        final double bv = e - s;
-        final double err = (s - (e - bv)) + (-p3 - bv) - pLow;
-        // exp(e + err − w1² − w2²): err is tiny compared with ulp(e) unless e is huge,
-        // in which case the result is 0 anyway.
-        return value(m * correction(err), e, w1, w2);
-    }
-
-    /**
      * Returns {@code m × exp(e) × exp(c)} for a rounded exponent e and its small error c.
      *
      * @param m multiplier

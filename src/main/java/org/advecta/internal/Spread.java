@@ -203,24 +203,6 @@ public final class Spread {
     }
 
     /**
-     * Returns m·exp(s − qx − qy) with qx = ξ²R/(4D_x t), qy = η²R/(4D_y t), the exponent
-     * summed in double-double.
-     *
-     * @param m finite multiplier
-     * @param s finite shift
-     * @param sx spread along x
-     * @param xi distance from the centre along x
-     * @param sy spread along y
-     * @param eta distance from the centre along y
-     * @return the product
-     */
-    public static double gaussian(double m, double s, Spread sx, double xi, Spread sy, double eta) {
-        final double hx = sx.exponentHigh(xi);
-        final double hy = sy.exponentHigh(eta);
-        return combine(m, s, hx, sx.exponentLow(xi, hx), hy, sy.exponentLow(eta, hy));
-    }
-
-    /**
      * Returns m·exp(s − qx − qy) for exponent parts given as double-doubles.
      *
      * @param m finite multiplier
@@ -261,27 +243,5 @@ public final class Spread {
         bv = h - h1;
         err += (h1 - (h - bv)) + (hz - bv);
         return ScaledExp.valueOfSplit(m, s, h, err + lx + ly + lz);
-    }
-
-    /**
-     * Returns m·exp(s − qx − qy − qz), the exponent summed in double-double.
-     *
-     * @param m finite multiplier
-     * @param s finite shift
-     * @param sx spread along x
-     * @param xi distance from the centre along x
-     * @param sy spread along y
-     * @param eta distance from the centre along y
-     * @param sz spread along z
-     * @param zeta distance from the centre along z
-     * @return the product
-     */
-    public static double gaussian(double m, double s, Spread sx, double xi, Spread sy, double eta,
-                                  Spread sz, double zeta) {
-        final double hx = sx.exponentHigh(xi);
-        final double hy = sy.exponentHigh(eta);
-        final double hz = sz.exponentHigh(zeta);
-        return combine(m, s, hx, sx.exponentLow(xi, hx), hy, sy.exponentLow(eta, hy), hz,
-            sz.exponentLow(zeta, hz));
     }
 }

@@ -55,17 +55,10 @@ final class ErfcxIntegrals {
     }
 
     /**
-     * J(a, b) = ½[erfc(a) − exp(−a²)·erfcx(b)] = exp(−a²)·∫_a^b φ(s) ds ≥ 0 for a ≤ b,
-     * without cancellation.
-     */
-    static double j(double a, double b) {
-        return jCentred(0.5 * a + 0.5 * b, 0.5 * b - 0.5 * a);
-    }
-
-    /**
-     * J(m − h, m + h) from the centre and half-width, which callers can often form more
-     * accurately than the ends (a half-width x/L far below the centre vt/(RL) would lose its
-     * digits in m ± h).
+     * J(a, b) = ½[erfc(a) − exp(−a²)·erfcx(b)] = exp(−a²)·∫_a^b φ(s) ds ≥ 0 for a = m − h ≤
+     * b = m + h, without cancellation, from the centre and half-width, which callers form
+     * more accurately than the ends (a half-width x/L far below the centre vt/(RL) would lose
+     * its digits in m ± h).
      */
     static double jCentred(double m, double h) {
         final double a = m - h;
