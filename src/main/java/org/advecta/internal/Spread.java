@@ -58,19 +58,28 @@ public final class Spread {
         return new Spread(twiceVariance, twiceVarianceLow, 1.0);
     }
 
-    /** R/(p + pLow) in double-double. */
+    /**
+     * R/(p + pLow) in double-double, with two divisions and one square root (every solution
+     * evaluation builds one): h = R·(1/p) need not be correctly rounded, because the fma
+     * remainder R − h·p is exact for any h near R/p and carries the rest into the low part.
+     */
     private Spread(double p, double pLow, double r) {
-        final double h = r / p;
+        final double invP = 1 / p;
+        final double h = r * invP;
         final double rem = Math.fma(-h, p, r);
-        this.collapsed = !(p / r >= COLLAPSE);
+        // p/R ≥ 2⁻⁶⁰⁰ ⟺ R/p ≤ 2⁶⁰⁰ for positive p and R (false for NaN)
+        this.collapsed = !(h <= 1 / COLLAPSE);
         this.high = h;
-        this.low = (rem - h * pLow) / p;
-        this.norm = Math.sqrt(h / Math.PI);
+        this.low = (rem - h * pLow) * invP;
         // √(high + low) = √(R/(4Dt)) = 1/L in double-double, for scaled distances ξ/L
         final double s = Math.sqrt(h);
+        this.norm = s * ONE_OVER_SQRT_PI;
         this.inverseLength = s;
         this.inverseLengthLow = (Math.fma(-s, s, h) + this.low) / (2 * s);
     }
+
+    /** 1/√π. */
+    private static final double ONE_OVER_SQRT_PI = 0.5641895835477563;
 
     /** Leading part of √(R/(4Dt)) = 1/L. */
     private final double inverseLength;

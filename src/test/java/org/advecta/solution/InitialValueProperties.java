@@ -32,20 +32,21 @@ class InitialValueProperties {
         final double slug = InitialSlug.of(p, a, b, 3.0).value(x, t);
         final double left = InitialStep.of(p, a, 3.0, InitialStep.Side.RIGHT).value(x, t);
         final double right = InitialStep.of(p, b, 3.0, InitialStep.Side.RIGHT).value(x, t);
-        // The two steps are each accurate to about (16 + 2κ) ulp, κ ≈ 2A² + 1 with
-        // A = (x − vt/R − edge)/L, and their difference cancels: compare in units of the
-        // larger step (mpmath shows the slug itself is the more accurate side).
+        // Each of the three is within its contract, (16 + 2κ) ulp with κ ≈ 2A² + 1,
+        // A = (x − vt/R − edge)/L: the identity holds to the sum of the three bounds
+        // (mpmath shows the slug is the more accurate side where the steps cancel).
         final double len = Math.sqrt(4 * p.dispersion() * t / r);
         final double aa = (x - v * t / r - a) / len;
         final double ab = (x - v * t / r - b) / len;
         final double kappa = 2 * Math.max(aa * aa, ab * ab) + 1;
-        final double tol = (16 + 2 * kappa) * Math.ulp(Math.max(left, right)) + 1e-300;
+        final double tol = (16 + 2 * kappa)
+            * (Math.ulp(left) + Math.ulp(right) + Math.ulp(slug)) + 1e-300;
         assertEquals(left - right, slug, tol);
         final double gSlug = InitialSlug.of(p, a, b, 3.0).gradient(x, t);
         final double gLeft = InitialStep.of(p, a, 3.0, InitialStep.Side.RIGHT).gradient(x, t);
         final double gRight = InitialStep.of(p, b, 3.0, InitialStep.Side.RIGHT).gradient(x, t);
-        assertEquals(gLeft - gRight, gSlug,
-            (16 + 2 * kappa) * Math.ulp(Math.max(Math.abs(gLeft), Math.abs(gRight))) + 1e-300);
+        assertEquals(gLeft - gRight, gSlug, (16 + 2 * kappa)
+            * (Math.ulp(gLeft) + Math.ulp(gRight) + Math.ulp(gSlug)) + 1e-300);
     }
 
     @Property(tries = 200)
