@@ -87,9 +87,10 @@ public final class ScaledExp {
      * @return the product
      */
     private static double finish(double m, double e, double c) {
-        // The common case in one test, so that a batch loop runs without further branches.
+        // The common case in one test, so that a batch loop runs without further branches;
+        // an exponent of exactly 0 (no decay, no square) needs no exponential at all.
         if (e >= EXP_SUBNORMAL && e <= EXP_OVERFLOW && Math.abs(c) < SMALL_CORRECTION) {
-            return m * (1.0 + c) * Math.exp(e);
+            return e == 0 ? m * (1.0 + c) : m * (1.0 + c) * Math.exp(e);
         }
         return finishRare(m, e, c);
     }
