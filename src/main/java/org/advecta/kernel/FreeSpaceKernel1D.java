@@ -17,7 +17,7 @@ import org.advecta.transport.TransportParameters;
  * <p>The substitution y = x − vt/R turns the equation into the heat equation with diffusivity
  * D/R, whose fundamental solution is the Gaussian above (Carslaw &amp; Jaeger 1959,
  * <i>Conduction of Heat in Solids</i>, §10.2; Crank 1975, <i>The Mathematics of Diffusion</i>,
- * eq. 2.6). Its integral over x is exp(−μt/R), its centre moves at v/R, and its variance is
+ * eq. 2.6, number recalled). Its integral over x is exp(−μt/R), its centre moves at v/R, and its variance is
  * 2Dt/R. Multiply by the released mass per unit cross-section divided by the mobile-phase
  * capacity (e.g. M/(θA)) to obtain a concentration.
  *

@@ -12,7 +12,7 @@ import org.advecta.transport.TransportParameters;
  * R(x, t) = ½ [exp((v−u)x/(2D))·erfc((x − ut/R)/L) + exp((v+u)x/(2D))·erfc((x + ut/R)/L)]
  * u = √(v² + 4μD),  L = √(4Dt/R),  R₀ = R with μ = 0
  * </pre>
- * for a constant input C₀ (Ogata &amp; Banks 1961, USGS Prof. Paper 411-A, eq. 20, for μ = 0;
+ * for a constant input C₀ (Ogata &amp; Banks 1961, USGS Prof. Paper 411-A, eq. 20 (number recalled), for μ = 0;
  * van Genuchten &amp; Alves 1982, USDA Tech. Bull. 1661, for μ &gt; 0 and Cᵢ ≠ 0). A pulse of
  * duration t₀ is R(t) − R(t − t₀); an input C₀·e^{−λt} is C₀·e^{−λt}·R with μ replaced by
  * μ − λR. Every exp × erfc product is evaluated without overflow, the complements 1 − R

@@ -16,7 +16,7 @@ import org.advecta.transport.TransportParameters;
  *                                                            h = (b − a)/(2L)
  * </pre>
  *
- * <p>The box convolved with the free-space kernel (Crank 1975, eq. 2.15, in the moving
+ * <p>The box convolved with the free-space kernel (Crank 1975, eq. 2.15 (number recalled), in the moving
  * coordinate). The difference of erf values is formed from the centre m and half-width h
  * ({@link ErrorFunctions#erfDifferenceCentred(double, double)}), so it does not cancel in the
  * tails (both erf near ±1) nor for a thin slug (b − a ≪ L). The gradient uses

@@ -16,7 +16,7 @@ import org.advecta.transport.TransportParameters;
  * </pre>
  *
  * <p>The initial step convolved with the free-space kernel (Crank 1975, <i>The Mathematics of
- * Diffusion</i>, eq. 2.14, with the moving coordinate x − vt/R). The product of the decay
+ * Diffusion</i>, eq. 2.14 (number recalled), with the moving coordinate x − vt/R). The product of the decay
  * factor and erfc is evaluated as one {@link ExpErfc} so that neither underflows first.
  *
  * <p>At t = 0 the value is C₀ on the loaded side, 0 on the other, C₀/2 at x₀; the gradient
