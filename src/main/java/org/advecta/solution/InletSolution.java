@@ -154,7 +154,7 @@ abstract class InletSolution extends AbstractSolution1D {
         // after the front both gradients are near the steady state's
         final double g = response.complementGradient(x, t1) - response.complementGradient(x, t);
         // For the flux inlet the complement's gradient is k·(T(∞) − T) plus a remainder of
-        // the other sign; under strong decay they cancel. When more than a digit is lost,
+        // the other sign; under strong decay they cancel. When more than two digits are lost,
         // integrate the impulse response's gradient instead.
         final double decayPart = response.steadyRate() * pulse(x, t);
         if (response instanceof ThirdTypeResponse
@@ -177,7 +177,7 @@ abstract class InletSolution extends AbstractSolution1D {
     }
 
     /** Fraction of cancellation beyond which a pulse gradient is integrated instead. */
-    private static final double CANCELLATION = 0.1;
+    private static final double CANCELLATION = 0.01;
 
     /** Deepest subdivision of {@link #integrateAdaptive}; 2⁻⁴⁰ of the interval is far finer
      * than any impulse response needs. */

@@ -147,9 +147,9 @@ public final class ErrorFunctions {
      * erfcx′(x) = 2x·erfcx(x) − 2/√π, accurate also for large x where the two terms agree in
      * most of their digits (erfcx′(x) ≈ −1/(√π x²)).
      *
-     * <p>For x ≥ 3/2 it is evaluated from Laplace's continued fraction for erfcx, whose
-     * tails give the derivative without cancellation; below, the direct formula loses at
-     * most a factor 7 to cancellation.
+     * <p>For x ≥ 3/2 it is evaluated without cancellation: from a Chebyshev series of
+     * x²·erfcx′(x) in 1/x up to 10 (coefficients from mpmath) and from the asymptotic
+     * series beyond; below 3/2 the direct formula loses at most a factor 7 to cancellation.
      *
      * <p>Special cases: NaN gives NaN; erfcxDerivative(+∞) = −0.0; −∞ for x below about
      * −26.6, where erfcx overflows.
@@ -168,8 +168,9 @@ public final class ErrorFunctions {
      * erfcx″(x) = 2(1 + 2x²)·erfcx(x) − 4x/√π, accurate also for large x where the terms
      * agree in most of their digits (erfcx″(x) ≈ 2/(√π x³)).
      *
-     * <p>For x ≥ 3/4 it is evaluated from Laplace's continued fraction for erfcx; below, the
-     * direct formula loses at most a factor 5 to cancellation.
+     * <p>For x ≥ 3/4 it is evaluated without cancellation: from Laplace's continued
+     * fraction for erfcx up to 3/2, a Chebyshev series of x³·erfcx″(x) in 1/x up to 10, and
+     * the asymptotic series beyond; below 3/4 the direct formula loses at most a factor 5.
      *
      * <p>Special cases: NaN gives NaN; erfcxSecondDerivative(+∞) = 0; +∞ for x below about
      * −26.6, where erfcx overflows.

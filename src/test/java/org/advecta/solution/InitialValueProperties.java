@@ -32,13 +32,16 @@ class InitialValueProperties {
         final double slug = InitialSlug.of(p, a, b, 3.0).value(x, t);
         final double left = InitialStep.of(p, a, 3.0, InitialStep.Side.RIGHT).value(x, t);
         final double right = InitialStep.of(p, b, 3.0, InitialStep.Side.RIGHT).value(x, t);
-        // Each of the three is within its contract, (16 + 2κ) ulp with κ ≈ 2A² + 1,
-        // A = (x − vt/R − edge)/L: the identity holds to the sum of the three bounds
-        // (mpmath shows the slug is the more accurate side where the steps cancel).
+        // Each of the three is within its contract, (16 + 2κ) ulp. Their condition number
+        // with respect to x, the edges and the drift is about 2|A|·(|x| + |edge| + |vt/R|)/L,
+        // and with respect to D, t, R about 2A² + 1, where A = (x − vt/R − edge)/L: the
+        // identity holds to the sum of the three bounds.
         final double len = Math.sqrt(4 * p.dispersion() * t / r);
         final double aa = (x - v * t / r - a) / len;
         final double ab = (x - v * t / r - b) / len;
-        final double kappa = 2 * Math.max(aa * aa, ab * ab) + 1;
+        final double am = Math.max(Math.abs(aa), Math.abs(ab));
+        final double positions = Math.abs(x) + Math.abs(a) + Math.abs(b) + Math.abs(v * t / r);
+        final double kappa = 2 * am * positions / len + 2 * am * am + 1;
         final double tol = (16 + 2 * kappa)
             * (Math.ulp(left) + Math.ulp(right) + Math.ulp(slug)) + 1e-300;
         assertEquals(left - right, slug, tol);
