@@ -1,5 +1,6 @@
 package org.advecta.solution;
 
+import org.advecta.internal.GaussLegendre;
 import org.advecta.internal.ScaledExp;
 import org.advecta.special.ErrorFunctions;
 
@@ -15,13 +16,6 @@ import org.advecta.special.ErrorFunctions;
  * the half-width is at most a quarter of that scale.
  */
 final class ErfcxIntegrals {
-
-    /** Positive nodes of the 10-point Gauss–Legendre rule on [−1, 1]. */
-    private static final double[] NODES = {0.14887433898163122, 0.4333953941292472,
-        0.6794095682990244, 0.8650633666889845, 0.9739065285171717};
-    /** Their weights. */
-    private static final double[] WEIGHTS = {0.29552422471475287, 0.26926671930999635,
-        0.21908636251598204, 0.1494513491505806, 0.06667134430868814};
 
     private ErfcxIntegrals() {
     }
@@ -46,12 +40,16 @@ final class ErfcxIntegrals {
 
     /** ∫ φ over [m − h, m + h] by 10-point Gauss–Legendre (for narrow intervals). */
     static double integralOfPhi(double m, double h) {
-        double sum = 0;
-        for (int i = NODES.length - 1; i >= 0; i--) {
-            final double d = h * NODES[i];
-            sum += WEIGHTS[i] * (phi(m + d) + phi(m - d));
-        }
-        return h * sum;
+        return GaussLegendre.integrate(ErfcxIntegrals::phi, m, h);
+    }
+
+    /**
+     * ∫ φ over [m − h, m + h] = (erfcx(m − h) − erfcx(m + h))/2: by quadrature where the
+     * interval is narrow, as the difference where it is wide (and cannot cancel badly).
+     */
+    static double integralOfPhiAnyWidth(double m, double h) {
+        return narrow(m, h) ? integralOfPhi(m, h)
+            : 0.5 * (ErrorFunctions.erfcx(m - h) - ErrorFunctions.erfcx(m + h));
     }
 
     /**
@@ -73,12 +71,7 @@ final class ErfcxIntegrals {
 
     /** ∫ ψ over [m − h, m + h] by 10-point Gauss–Legendre (for narrow intervals). */
     static double integralOfPsi(double m, double h) {
-        double sum = 0;
-        for (int i = NODES.length - 1; i >= 0; i--) {
-            final double d = h * NODES[i];
-            sum += WEIGHTS[i] * (psi(m + d) + psi(m - d));
-        }
-        return h * sum;
+        return GaussLegendre.integrate(ErfcxIntegrals::psi, m, h);
     }
 
     /**
@@ -106,13 +99,10 @@ final class ErfcxIntegrals {
      */
     static double expTimesJ(double e, double m, double h) {
         final double a = m - h;
-        final double b = m + h;
         if (a < ERFCX_OVERFLOW) {
             return Math.exp(e) * jCentred(m, h);
         }
-        final double integral = narrow(m, h) ? integralOfPhi(m, h)
-            : 0.5 * (ErrorFunctions.erfcx(a) - ErrorFunctions.erfcx(b));
-        return ScaledExp.value(integral, e, a);
+        return ScaledExp.value(integralOfPhiAnyWidth(m, h), e, a);
     }
 
     /** Below this, erfcx overflows (2·exp(26.6²) &gt; MAX_VALUE); −26 leaves a margin. */

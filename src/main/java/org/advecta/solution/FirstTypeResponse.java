@@ -115,8 +115,7 @@ final class FirstTypeResponse implements UnitResponse {
         if (a < 0) {
             return steadyRate() * complement(x, t) + gradientRemainder(x, t, s);
         }
-        final double integral = ErfcxIntegrals.narrow(m, h) ? ErfcxIntegrals.integralOfPhi(m, h)
-            : 0.5 * (ErrorFunctions.erfcx(a) - ErrorFunctions.erfcx(b));
+        final double integral = ErfcxIntegrals.integralOfPhiAnyWidth(m, h);
         final double av = s.scaled(x - v / r * t);
         final double bracket = ErfcxIntegrals.phi(a) + ErfcxIntegrals.phi(b) - 2 * av * integral;
         return ScaledExp.value(s.inverseLength() * bracket, trueDecay(t), av);

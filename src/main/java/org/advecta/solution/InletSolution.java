@@ -1,6 +1,7 @@
 package org.advecta.solution;
 
 import org.advecta.internal.Checks;
+import org.advecta.internal.GaussLegendre;
 import org.advecta.transport.TransportParameters;
 
 /**
@@ -9,12 +10,6 @@ import org.advecta.transport.TransportParameters;
  */
 abstract class InletSolution extends AbstractSolution1D {
 
-    /** Positive nodes of the 10-point Gauss–Legendre rule on [−1, 1]. */
-    private static final double[] NODES = {0.14887433898163122, 0.4333953941292472,
-        0.6794095682990244, 0.8650633666889845, 0.9739065285171717};
-    /** Their weights. */
-    private static final double[] WEIGHTS = {0.29552422471475287, 0.26926671930999635,
-        0.21908636251598204, 0.1494513491505806, 0.06667134430868814};
     /**
      * The pulse response is integrated over [t − t₀, t] by quadrature when t₀ ≤ t/4 and the
      * impulse response changes by at most this factor across the interval; then the
@@ -207,15 +202,7 @@ abstract class InletSolution extends AbstractSolution1D {
 
     /** ∫ over [t1, t] of the impulse response (or its x-derivative), 10-point Gauss–Legendre. */
     private double integrate(double x, double t1, double t, boolean gradient) {
-        final double m = 0.5 * t1 + 0.5 * t;
-        final double h = 0.5 * t - 0.5 * t1;
-        double sum = 0;
-        for (int i = NODES.length - 1; i >= 0; i--) {
-            final double d = h * NODES[i];
-            sum += WEIGHTS[i] * (gradient
-                ? response.densityGradient(x, m + d) + response.densityGradient(x, m - d)
-                : response.density(x, m + d) + response.density(x, m - d));
-        }
-        return h * sum;
+        return GaussLegendre.integrate(gradient ? tau -> response.densityGradient(x, tau)
+            : tau -> response.density(x, tau), 0.5 * t1 + 0.5 * t, 0.5 * t - 0.5 * t1);
     }
 }

@@ -97,10 +97,8 @@ final class ThirdTypeResponse implements UnitResponse {
         if (a < 0) {
             return factor * ErfcxIntegrals.expTimesJ(e, m, h);
         }
-        final double b = m + h;
-        final double integral = ErfcxIntegrals.narrow(m, h) ? ErfcxIntegrals.integralOfPhi(m, h)
-            : 0.5 * (ErrorFunctions.erfcx(a) - ErrorFunctions.erfcx(b));
-        return ScaledExp.value(factor * integral, p.decay, p.av);
+        return ScaledExp.value(factor * ErfcxIntegrals.integralOfPhiAnyWidth(m, h), p.decay,
+            p.av);
     }
 
     @Override
@@ -178,25 +176,18 @@ final class ThirdTypeResponse implements UnitResponse {
     public double density(double x, double t) {
         // ∂T/∂t = e^{−μt/R}·(2P_v/t)·e^{−A_v²}·[φ(B_v) + Q·erfcx(B_v)]; the decay factor is
         // exact because the unit impulse entered at t = 0 decays uniformly.
-        final Spread s = Spread.of(d, r, t);
-        final double av = s.scaled(x - v / r * t);
-        final double bv = s.scaled(x + v / r * t);
-        final double pv = s.scaled(v / r * t);
-        final double q = s.scaled(x);
-        final double bracket = ErfcxIntegrals.phi(bv) + q * ErrorFunctions.erfcx(bv);
-        return ScaledExp.value(2 * pv / t * bracket, -mu / r * t, av);
+        final Point p = new Point(x, t);
+        final double bracket = ErfcxIntegrals.phi(p.bv) + p.q * ErrorFunctions.erfcx(p.bv);
+        return ScaledExp.value(2 * p.pv / t * bracket, -mu / r * t, p.av);
     }
 
     @Override
     public double densityGradient(double x, double t) {
-        final Spread s = Spread.of(d, r, t);
-        final double av = s.scaled(x - v / r * t);
-        final double bv = s.scaled(x + v / r * t);
-        final double pv = s.scaled(v / r * t);
-        final double q = s.scaled(x);
-        final double bracket = ErrorFunctions.erfcx(bv) * (1 - 2 * av * q)
-            - ErfcxIntegrals.psi(bv) - 2 * ErfcxIntegrals.phi(bv) * (av + q);
-        return ScaledExp.value(2 * pv / t * s.inverseLength() * bracket, -mu / r * t, av);
+        final Point p = new Point(x, t);
+        final double bracket = ErrorFunctions.erfcx(p.bv) * (1 - 2 * p.av * p.q)
+            - ErfcxIntegrals.psi(p.bv) - 2 * ErfcxIntegrals.phi(p.bv) * (p.av + p.q);
+        return ScaledExp.value(2 * p.pv / t * p.s.inverseLength() * bracket, -mu / r * t,
+            p.av);
     }
 
     @Override
@@ -209,12 +200,8 @@ final class ThirdTypeResponse implements UnitResponse {
     @Override
     public double flushGradient(double x, double t) {
         // −∂T₀/∂x = (4P/L)·e^{−A²}·[2Qφ(B) + ψ(B)]
-        final Spread s = Spread.of(d, r, t);
-        final double av = s.scaled(x - v / r * t);
-        final double bv = s.scaled(x + v / r * t);
-        final double pv = s.scaled(v / r * t);
-        final double q = s.scaled(x);
-        final double bracket = 2 * q * ErfcxIntegrals.phi(bv) + ErfcxIntegrals.psi(bv);
-        return ScaledExp.value(4 * pv * s.inverseLength() * bracket, 0.0, av);
+        final Point p = new Point(x, t);
+        final double bracket = 2 * p.q * ErfcxIntegrals.phi(p.bv) + ErfcxIntegrals.psi(p.bv);
+        return ScaledExp.value(4 * p.pv * p.s.inverseLength() * bracket, 0.0, p.av);
     }
 }

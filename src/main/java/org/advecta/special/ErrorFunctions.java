@@ -1,5 +1,6 @@
 package org.advecta.special;
 
+import org.advecta.internal.GaussLegendre;
 import org.apache.commons.numbers.gamma.Erf;
 import org.apache.commons.numbers.gamma.ErfDifference;
 import org.apache.commons.numbers.gamma.Erfc;
@@ -186,23 +187,11 @@ public final class ErrorFunctions {
 
     /** Half-widths below this may use the quadrature of {@link #erfDifferenceCentred}. */
     private static final double NARROW_HALF_WIDTH = 0.5;
-    /** Positive nodes of the 10-point Gauss–Legendre rule on [−1, 1]. */
-    private static final double[] GL_NODES = {0.14887433898163122, 0.4333953941292472,
-        0.6794095682990244, 0.8650633666889845, 0.9739065285171717};
-    /** Their weights. */
-    private static final double[] GL_WEIGHTS = {0.29552422471475287, 0.26926671930999635,
-        0.21908636251598204, 0.1494513491505806, 0.06667134430868814};
     /** 2/√π. */
     private static final double TWO_OVER_SQRT_PI = 1.1283791670955126;
 
     private static double narrowErfDifference(double m, double h) {
-        double sum = 0;
-        for (int i = GL_NODES.length - 1; i >= 0; i--) {
-            final double d = h * GL_NODES[i];
-            sum += GL_WEIGHTS[i] * (Exponentials.expMinusSquare(m + d)
-                + Exponentials.expMinusSquare(m - d));
-        }
-        return TWO_OVER_SQRT_PI * h * sum;
+        return TWO_OVER_SQRT_PI * GaussLegendre.integrate(Exponentials::expMinusSquare, m, h);
     }
 
     /**
