@@ -121,7 +121,9 @@ class InitialValueProperties {
             InitialSlug.of(p, -0.5 * len, 0.3 * len, 2),
             InitialGaussian.of(p, 0.2 * len, 0.5 * len, 1),
             DecayingBackground.of(p, 1.5)}) {
-            final double ht = 1e-3 * t / (1 + w * w);
+            // time steps also below the time the front takes to pass, L·R/|v|
+            final double ht = 1e-3 * Math.min(t / (1 + w * w),
+                len * r / Math.max(Math.abs(v), 1e-300) / (1 + Math.abs(w)));
             final double hx = 1e-3 * len / (1 + Math.abs(w));
             final double ct = (-c.value(x, t + 2 * ht) + 8 * c.value(x, t + ht)
                 - 8 * c.value(x, t - ht) + c.value(x, t - 2 * ht)) / (12 * ht);

@@ -94,11 +94,13 @@ class InletProperties {
         }
         final double d = p.dispersion();
         // Fourth-order central differences with steps of 1e-3 of the scales on which c
-        // changes: t/(1 + A²) in time and L/(1 + |A|) in x, A = (x − vt/R)/L the distance from
-        // the front in units of L = √(4Dt/R) (in the tails ln c changes like A²).
+        // changes: t/(1 + A²) and the front's passing time L·R/|v| in time, L/(1 + |A|) in x,
+        // A = (x − vt/R)/L the distance from the front in units of L = √(4Dt/R).
         final double len = Math.sqrt(4 * d * t / r);
         final double a = Math.abs(x - v * t / r) / len;
-        final double ht = 1e-3 * Math.min(t, Math.abs(t - input.duration())) / (1 + a * a);
+        final double ht = 1e-3 * Math.min(
+            Math.min(t, Math.abs(t - input.duration())) / (1 + a * a),
+            len * r / Math.max(Math.abs(v), 1e-300) / (1 + a));
         final double hx = 1e-3 * Math.min(x, len / (1 + a));
         final double ct = (-c.value(x, t + 2 * ht) + 8 * c.value(x, t + ht)
             - 8 * c.value(x, t - ht) + c.value(x, t - 2 * ht)) / (12 * ht);
