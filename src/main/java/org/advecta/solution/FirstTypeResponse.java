@@ -31,6 +31,16 @@ final class FirstTypeResponse implements UnitResponse {
     private final double vMinusU;
     /** v − |v|, for the decay-free response R₀ (u₀ = |v|). */
     private final double vMinusU0;
+    // Quotients of the formulas, divided once here rather than at every point.
+    private final double uR;
+    private final double vR;
+    private final double muR;
+    private final double muTrueR;
+    private final double vMinusUR;
+    /** k = (v − u)/(2D), so that s₁ = k·x. */
+    private final double k;
+    /** (v − |v|)/(2D), s₁ of the decay-free response. */
+    private final double k0;
 
     FirstTypeResponse(double v, double d, double r, double mu, double muTrue) {
         this.v = v;
@@ -46,11 +56,18 @@ final class FirstTypeResponse implements UnitResponse {
             this.vMinusU = v - u;
         }
         this.vMinusU0 = Math.min(v, 0) * 2;
+        this.uR = u / r;
+        this.vR = v / r;
+        this.muR = mu / r;
+        this.muTrueR = muTrue / r;
+        this.vMinusUR = vMinusU / r;
+        this.k = vMinusU / (2 * d);
+        this.k0 = vMinusU0 / (2 * d);
     }
 
     /** s₁ = (v − u)x/(2D). */
     private double s1(double x) {
-        return vMinusU * x / (2 * d);
+        return k * x;
     }
 
     /**
@@ -59,7 +76,7 @@ final class FirstTypeResponse implements UnitResponse {
      * cancellation between s₁ and −λt, both large for a fast exponential input.
      */
     private double trueDecay(double t) {
-        return -muTrue / r * t;
+        return -muTrueR * t;
     }
 
     /** factor·exp(s₁ + shift)·erfc(A_u), as exp(−A_v² − μt/R)·erfcx(A_u) when A_u ≥ 0. */
@@ -67,7 +84,7 @@ final class FirstTypeResponse implements UnitResponse {
                              double au) {
         if (au >= 0) {
             return ScaledExp.value(factor * ErrorFunctions.erfcx(au), trueDecay(t),
-                s.scaled(x - v / r * t));
+                s.scaled(x - vR * t));
         }
         // erfc(A_u) is in (1, 2]; s₁ + shift ≤ 0 unless an input grows
         return ScaledExp.value(factor * ErrorFunctions.erfc(au), s1(x) + shift, 0.0);
@@ -76,22 +93,36 @@ final class FirstTypeResponse implements UnitResponse {
     @Override
     public double value(double x, double t, double shift) {
         final Spread s = Spread.of(d, r, t);
-        final double au = s.scaled(x - u / r * t);
-        final double bu = s.scaled(x + u / r * t);
-        final double av = s.scaled(x - v / r * t);
-        return firstTerm(0.5, x, t, shift, s, au)
-            + ScaledExp.value(0.5 * ErrorFunctions.erfcx(bu), trueDecay(t), av);
+        final double au = s.scaled(x - uR * t);
+        final double bu = s.scaled(x + uR * t);
+        final double av = s.scaled(x - vR * t);
+        final double second = 0.5 * ErrorFunctions.erfcx(bu);
+        if (au >= ERFCX_FROM) {
+            // both terms carry exp(−A_v² − μt/R): one exponential for the two
+            return ScaledExp.value(0.5 * ErrorFunctions.erfcx(au) + second, trueDecay(t), av);
+        }
+        // erfc(A_u) ≥ erfc(1/2) ≈ 0.48 costs no exponential here, and e^{s₁+shift} is 1 when
+        // μ = 0 and the input is constant (ScaledExp then skips it)
+        return ScaledExp.value(0.5 * ErrorFunctions.erfc(au), s1(x) + shift, 0.0)
+            + ScaledExp.value(second, trueDecay(t), av);
     }
+
+    /**
+     * From this A_u on, the first term is evaluated as exp(−A_v² − μt/R)·erfcx(A_u): below
+     * it erfcx needs an exponential of its own (Commons Numbers computes it from erf below
+     * 1/2), while erfc(A_u) needs none.
+     */
+    private static final double ERFCX_FROM = 0.5;
 
     @Override
     public double gradient(double x, double t, double shift) {
         // ∂F/∂x = (v−u)/(4D)·e^{s1}erfc(A_u) − (e^{s1−A_u²}/L)·[(A_v + B_u)·erfcx(B_u) + 2φ(B_u)]
         // with A_v + B_u = (2x + (u − v)t/R)/L ≥ 0: every term is ≤ 0, nothing cancels.
         final Spread s = Spread.of(d, r, t);
-        final double au = s.scaled(x - u / r * t);
-        final double bu = s.scaled(x + u / r * t);
-        final double av = s.scaled(x - v / r * t);
-        final double avPlusBu = s.scaled(2 * x - vMinusU / r * t);
+        final double au = s.scaled(x - uR * t);
+        final double bu = s.scaled(x + uR * t);
+        final double av = s.scaled(x - vR * t);
+        final double avPlusBu = s.scaled(2 * x - vMinusUR * t);
         final double bracket = avPlusBu * ErrorFunctions.erfcx(bu) + 2 * ErfcxIntegrals.phi(bu);
         return firstTerm(vMinusU / (4 * d), x, t, shift, s, au)
             - ScaledExp.value(s.inverseLength() * bracket, trueDecay(t), av);
@@ -99,7 +130,7 @@ final class FirstTypeResponse implements UnitResponse {
 
     @Override
     public double steadyRate() {
-        return vMinusU / (2 * d);
+        return k;
     }
 
     @Override
@@ -108,7 +139,7 @@ final class FirstTypeResponse implements UnitResponse {
         // ∂/∂x = (e^{−A_v² − μt/R}/L)·[φ(a) + φ(b) − 2A_v·∫_a^b φ]: the exponent's own
         // x-derivative −2A_v/L is applied directly (k + 2a/L nearly cancel otherwise).
         final Spread s = Spread.of(d, r, t);
-        final double m = s.scaled(u / r * t);
+        final double m = s.scaled(uR * t);
         final double h = s.scaled(x);
         final double a = m - h;
         final double b = m + h;
@@ -116,15 +147,15 @@ final class FirstTypeResponse implements UnitResponse {
             return steadyRate() * complement(x, t) + gradientRemainder(x, t, s);
         }
         final double integral = ErfcxIntegrals.integralOfPhiAnyWidth(m, h);
-        final double av = s.scaled(x - v / r * t);
+        final double av = s.scaled(x - vR * t);
         final double bracket = ErfcxIntegrals.phi(a) + ErfcxIntegrals.phi(b) - 2 * av * integral;
         return ScaledExp.value(s.inverseLength() * bracket, trueDecay(t), av);
     }
 
     /** k·F − F_x = (2e^{s1 − A_u²}/L)·[φ(B_u) + Q·erfcx(B_u)],  Q = x/L. */
     private double gradientRemainder(double x, double t, Spread s) {
-        final double au = s.scaled(x - u / r * t);
-        final double bu = s.scaled(x + u / r * t);
+        final double au = s.scaled(x - uR * t);
+        final double bu = s.scaled(x + uR * t);
         final double bracket = ErfcxIntegrals.phi(bu) + s.scaled(x) * ErrorFunctions.erfcx(bu);
         return ScaledExp.value(2 * s.inverseLength() * bracket, s1(x), au);
     }
@@ -141,11 +172,11 @@ final class FirstTypeResponse implements UnitResponse {
      */
     double fluxAveragedUpstream(double x, double t, double shift) {
         final Spread s = Spread.of(d, r, t);
-        final double au = s.scaled(x - u / r * t);
-        final double bu = s.scaled(x + u / r * t);
-        final double av = s.scaled(x - v / r * t);
+        final double au = s.scaled(x - uR * t);
+        final double bu = s.scaled(x + uR * t);
+        final double av = s.scaled(x - vR * t);
         final double vPlusU = 4 * mu * d / (u - v);
-        final double pv = s.scaled(-v / r * t);
+        final double pv = s.scaled(-vR * t);
         final double puMinusPv = s.scaled(vPlusU / r * t);
         final double bracket = (puMinusPv + 2 * s.scaled(x)) * ErrorFunctions.erfcx(bu)
             + 2 * ErfcxIntegrals.phi(bu);
@@ -163,24 +194,24 @@ final class FirstTypeResponse implements UnitResponse {
         // F(∞) − F(t) = e^{s1}·½[erfc(−A_u) − e^{−A_u²}erfcx(B_u)] = e^{s1}·J(−A_u, B_u)
         // −A_u and B_u are P_u ∓ Q with P_u = ut/(RL), Q = x/L: pass those, not x ± ut/R
         final Spread s = Spread.of(d, r, t);
-        return Math.exp(s1(x)) * ErfcxIntegrals.jCentred(s.scaled(u / r * t), s.scaled(x));
+        return Math.exp(s1(x)) * ErfcxIntegrals.jCentred(s.scaled(uR * t), s.scaled(x));
     }
 
     @Override
     public double density(double x, double t) {
         // ∂F/∂t = x/(t√π L)·exp(−μt/R − A_v²): the first-passage density (Duhamel)
         final Spread s = Spread.of(d, r, t);
-        final double av = s.scaled(x - v / r * t);
-        return ScaledExp.value(s.scaled(x) / (t * SQRT_PI), -mu / r * t, av);
+        final double av = s.scaled(x - vR * t);
+        return ScaledExp.value(s.scaled(x) / (t * SQRT_PI), -muR * t, av);
     }
 
     @Override
     public double densityGradient(double x, double t) {
         // ∂/∂x of x/(t√π L)·e^{−μt/R − A²} = e^{−μt/R − A²}/(t√π L)·(1 − 2A·x/L)
         final Spread s = Spread.of(d, r, t);
-        final double av = s.scaled(x - v / r * t);
+        final double av = s.scaled(x - vR * t);
         final double q = s.scaled(x);
-        return ScaledExp.value(s.inverseLength() / (t * SQRT_PI), -mu / r * t, av)
+        return ScaledExp.value(s.inverseLength() / (t * SQRT_PI), -muR * t, av)
             * (1 - 2 * av * q);
     }
 
@@ -189,10 +220,9 @@ final class FirstTypeResponse implements UnitResponse {
         // 1 − F₀ = (1 − e^{s1⁰}) + e^{s1⁰}·J(−A₀, B₀), u₀ = |v|, s1⁰ = min(v, 0)·x/D ≤ 0:
         // two non-negative terms.
         final Spread s = Spread.of(d, r, t);
-        final double u0 = Math.abs(v);
-        final double s10 = vMinusU0 * x / (2 * d);
+        final double s10 = k0 * x;
         return -Math.expm1(s10)
-            + Math.exp(s10) * ErfcxIntegrals.jCentred(s.scaled(u0 / r * t), s.scaled(x));
+            + Math.exp(s10) * ErfcxIntegrals.jCentred(s.scaled(Math.abs(vR) * t), s.scaled(x));
     }
 
     @Override

@@ -23,6 +23,10 @@ abstract class InletSolution extends AbstractSolution1D {
     final double initial;
     /** The unit response with the decay coefficient the input needs. */
     final UnitResponse response;
+    // The input's parameters, read at every point.
+    private final InletInput.Kind kind;
+    private final double level;
+    private final double rate;
 
     InletSolution(TransportParameters parameters, InletInput input, double initial) {
         super(parameters, Domain.HALF_LINE);
@@ -30,6 +34,9 @@ abstract class InletSolution extends AbstractSolution1D {
             throw new IllegalArgumentException("input: must not be null");
         }
         this.input = input;
+        this.kind = input.kind();
+        this.level = input.level();
+        this.rate = input.kind() == InletInput.Kind.EXPONENTIAL ? input.rate() : 0.0;
         this.initial = Checks.finite("ci", initial);
         final double mu = parameters.decayRate();
         double effective = mu;
@@ -72,7 +79,7 @@ abstract class InletSolution extends AbstractSolution1D {
 
     @Override
     double valueAt(double x, double t) {
-        final double fromInput = input.level() == 0 ? 0.0 : input.level() * inputResponse(x, t);
+        final double fromInput = level == 0 ? 0.0 : level * inputResponse(x, t);
         if (initial == 0) {
             return fromInput;
         }
@@ -81,34 +88,28 @@ abstract class InletSolution extends AbstractSolution1D {
 
     @Override
     final double gradientAt(double x, double t) {
-        final double fromInput = input.level() == 0 ? 0.0
-            : input.level() * inputResponseGradient(x, t);
+        final double fromInput = level == 0 ? 0.0 : level * inputResponseGradient(x, t);
         if (initial == 0) {
             return fromInput;
         }
         return fromInput + initial * Math.exp(decayExponent(t)) * response.flushGradient(x, t);
     }
 
+    // Plain comparisons of the kind held in a field rather than a switch on the enum: these
+    // run at every point of a profile, and the switch's lookup table is a load more.
     private double inputResponse(double x, double t) {
-        switch (input.kind()) {
-            case EXPONENTIAL:
-                return response.value(x, t, -input.rate() * t);
-            case PULSE:
-                return pulse(x, t);
-            default:
-                return response.value(x, t, 0.0);
+        if (kind == InletInput.Kind.CONSTANT) {
+            return response.value(x, t, 0.0);
         }
+        return kind == InletInput.Kind.PULSE ? pulse(x, t) : response.value(x, t, -rate * t);
     }
 
     private double inputResponseGradient(double x, double t) {
-        switch (input.kind()) {
-            case EXPONENTIAL:
-                return response.gradient(x, t, -input.rate() * t);
-            case PULSE:
-                return pulseGradient(x, t);
-            default:
-                return response.gradient(x, t, 0.0);
+        if (kind == InletInput.Kind.CONSTANT) {
+            return response.gradient(x, t, 0.0);
         }
+        return kind == InletInput.Kind.PULSE ? pulseGradient(x, t)
+            : response.gradient(x, t, -rate * t);
     }
 
     /**

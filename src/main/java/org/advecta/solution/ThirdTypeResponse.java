@@ -33,6 +33,16 @@ final class ThirdTypeResponse implements UnitResponse {
     private final double u;
     /** v − u, without cancellation. */
     private final double vMinusU;
+    // Quotients of the formulas, divided once here rather than at every point.
+    private final double uR;
+    private final double vR;
+    private final double muR;
+    private final double muTrueR;
+    private final double vMinusUR;
+    /** k = (v − u)/(2D), so that s₁ = k·x. */
+    private final double k;
+    /** v/(u + v), the factor of the whole solution (½ when μ = 0). */
+    private final double ratio;
 
     ThirdTypeResponse(double v, double d, double r, double mu, double muTrue) {
         this.v = v;
@@ -42,6 +52,13 @@ final class ThirdTypeResponse implements UnitResponse {
         this.muTrue = muTrue;
         this.u = Math.sqrt(Math.fma(4 * mu, d, v * v));
         this.vMinusU = -4 * mu * d / (v + u);
+        this.uR = u / r;
+        this.vR = v / r;
+        this.muR = mu / r;
+        this.muTrueR = muTrue / r;
+        this.vMinusUR = vMinusU / r;
+        this.k = vMinusU / (2 * d);
+        this.ratio = v / (u + v);
     }
 
     /** The per-(x, t) quantities of the formula. */
@@ -59,21 +76,80 @@ final class ThirdTypeResponse implements UnitResponse {
 
         Point(double x, double t) {
             s = Spread.of(d, r, t);
-            au = s.scaled(x - u / r * t);
-            bu = s.scaled(x + u / r * t);
-            bv = s.scaled(x + v / r * t);
-            pv = s.scaled(v / r * t);
+            au = s.scaled(x - uR * t);
+            bu = s.scaled(x + uR * t);
+            bv = s.scaled(x + vR * t);
+            pv = s.scaled(vR * t);
             q = s.scaled(x);
-            s1 = vMinusU * x / (2 * d);
-            av = s.scaled(x - v / r * t);
-            decay = -muTrue / r * t;
+            s1 = k * x;
+            av = s.scaled(x - vR * t);
+            decay = -muTrueR * t;
         }
     }
 
     @Override
     public double value(double x, double t, double shift) {
-        return valueTimes(1.0, new Point(x, t), t, shift);
+        // The formula of the class comment with local variables only (no Point: this runs at
+        // every point of a profile, and the allocation would cost as much as the formula).
+        final Spread s = Spread.of(d, r, t);
+        if (mu == 0 && shift == 0) {
+            final double undecayed = withoutDecay(x, t, s);
+            if (undecayed == undecayed) {
+                return undecayed;
+            }
+        }
+        final double q = s.scaled(x);
+        final double pu = s.scaled(uR * t);
+        final double av = s.scaled(x - vR * t);
+        final double decay = -muTrueR * t;
+        // 4 v/(u+v)·P_v·M, the multiplier of exp(−A_v² − μt/R)
+        final double second = 4 * ratio * s.scaled(vR * t)
+            * ErfcxIntegrals.meanOfPhi(s.scaled(x + vR * t), s.scaled(x + uR * t));
+        final double a = q - pu;
+        if (a >= 0) {
+            // e^{s₁+shift}·J(A_u, B_u) = e^{−A_v² − μt/R}·∫φ over [A_u, B_u]: one exponential
+            // for both terms (for A_u < 0 the integral holds e^{A_u²}, which must meet the
+            // very same A_u in the exponent, as below)
+            return ScaledExp.value(2 * ratio * ErfcxIntegrals.integralOfPhiAnyWidth(q, pu)
+                + second, decay, av);
+        }
+        // the exponential factors applied as s₁ + shift − A_u², without the cancellation of
+        // s₁ − λt against the decay
+        return 2 * ratio * ErfcxIntegrals.expTimesJ(k * x + shift, q, pu)
+            + ScaledExp.value(second, decay, av);
     }
+
+    /**
+     * T for μ = 0 and a constant input (u = v, s₁ = 0), where the class comment's form is
+     * <pre>
+     * T = ½erfc(A) + e^{−A²}·[2P·φ(B) − ½erfcx(B)]          (A &lt; 1/2)
+     * T = e^{−A²}·[½(erfcx(A) − erfcx(B)) + 2P·φ(B)]        (A ≥ 1/2)
+     * </pre>
+     * with A = (x − vt/R)/L, B = (x + vt/R)/L, P = vt/(RL). Both need one exponential and no
+     * erfcx of an argument below 1/2 (which costs one of its own). The bracket of the first
+     * line is ≈ −A/(2√π B²): it cancels, but its error is a few units of 2⁻⁵³·erfcx(B),
+     * small beside ½erfc(A) ≥ 0.24. For an interval [A, B] narrow beside its centre (early
+     * times, P ≤ max(1, Q)/4), ½erfc(A) and the bracket would cancel: NaN is returned and
+     * the caller takes the general path, which integrates φ there.
+     */
+    private double withoutDecay(double x, double t, Spread s) {
+        final double q = s.scaled(x);
+        final double p = s.scaled(vR * t);
+        if (ErfcxIntegrals.narrow(q, p)) {
+            return Double.NaN;
+        }
+        final double a = s.scaled(x - vR * t);
+        final double b = s.scaled(x + vR * t);
+        final double erfcxB = ErrorFunctions.erfcx(b);
+        final double phiTerm = 2 * p * ErfcxIntegrals.phi(b);
+        if (a >= ERFCX_FROM) {
+            return ScaledExp.value(0.5 * (ErrorFunctions.erfcx(a) - erfcxB) + phiTerm, 0.0, a);
+        }
+        return 0.5 * ErrorFunctions.erfc(a) + ScaledExp.value(phiTerm - 0.5 * erfcxB, 0.0, a);
+    }
+
+    /** See {@link #withoutDecay}: from here on erfcx(A) costs no exponential. */
+    private static final double ERFCX_FROM = 0.5;
 
     /**
      * factor × value, the factor applied inside the exponentials' multipliers so that a
@@ -81,9 +157,9 @@ final class ThirdTypeResponse implements UnitResponse {
      */
     private double valueTimes(double factor, Point p, double t, double shift) {
         final double m = ErfcxIntegrals.meanOfPhi(p.bv, p.bu);
-        final double f = factor * v / (u + v);
+        final double f = factor * ratio;
         // 2e^{s1+shift}·J(A_u, B_u): centre Q = x/L, half-width P_u = ut/(RL)
-        final double first = expTimesJ(p, 2 * f, p.s1 + shift, p.q, p.s.scaled(u / r * t));
+        final double first = expTimesJ(p, 2 * f, p.s1 + shift, p.q, p.s.scaled(uR * t));
         final double second = ScaledExp.value(f * 4 * p.pv * m, p.decay, p.av);
         return first + second;
     }
@@ -103,7 +179,7 @@ final class ThirdTypeResponse implements UnitResponse {
 
     @Override
     public double steadyRate() {
-        return vMinusU / (2 * d);
+        return k;
     }
 
     @Override
@@ -118,11 +194,11 @@ final class ThirdTypeResponse implements UnitResponse {
 
     /** The bracket of the gradient (see {@link #gradient}); ≤ 0. */
     private double inner(Point p, double t) {
-        final double pu = p.s.scaled(u / r * t);
+        final double pu = p.s.scaled(uR * t);
         final double m = ErfcxIntegrals.meanOfPhi(p.bv, p.bu);
         final double mPsi = ErfcxIntegrals.meanOfPsi(p.bv, p.bu);
         final double phiBu = ErfcxIntegrals.phi(p.bu);
-        final double pvMinusPu = p.s.scaled(vMinusU / r * t);
+        final double pvMinusPu = p.s.scaled(vMinusUR * t);
         return -pu * ErfcxIntegrals.psi(p.bu) - p.pv * mPsi
             - 4 * pu * p.q * phiBu - 2 * pu * p.au * (m - phiBu) - 2 * pvMinusPu * p.au * m;
     }
@@ -135,20 +211,20 @@ final class ThirdTypeResponse implements UnitResponse {
         // collects −P_u erfcx(B_u) − 2P_v A_u M − P_v M_ψ so that its leading terms share
         // a sign (erfcx = ψ + 2sφ, A_u + B_u = 2Q).
         final Point p = new Point(x, t);
-        return valueTimes(vMinusU / (2 * d), p, t, shift)
+        return valueTimes(k, p, t, shift)
             + v / (u + v) * ScaledExp.value(4 * p.s.inverseLength() * inner(p, t), p.decay, p.av);
     }
 
     @Override
     public double steady(double x) {
-        return 2 * v / (u + v) * Math.exp(vMinusU * x / (2 * d));
+        return 2 * v / (u + v) * Math.exp(k * x);
     }
 
     @Override
     public double complement(double x, double t) {
         // T(∞) − T(t) = v/(u+v)·e^{s1}·[core(A_u, B_u) + 4e^{−A_u²}(P_u φ(B_u) − P_v M)]
         final Point p = new Point(x, t);
-        final double pu = p.s.scaled(u / r * t);
+        final double pu = p.s.scaled(uR * t);
         final double m = ErfcxIntegrals.meanOfPhi(p.bv, p.bu);
         final double phiBu = ErfcxIntegrals.phi(p.bu);
         final double correction = 4 * ((pu - p.pv) * phiBu + p.pv * (phiBu - m));
@@ -178,7 +254,7 @@ final class ThirdTypeResponse implements UnitResponse {
         // exact because the unit impulse entered at t = 0 decays uniformly.
         final Point p = new Point(x, t);
         final double bracket = ErfcxIntegrals.phi(p.bv) + p.q * ErrorFunctions.erfcx(p.bv);
-        return ScaledExp.value(2 * p.pv / t * bracket, -mu / r * t, p.av);
+        return ScaledExp.value(2 * p.pv / t * bracket, -muR * t, p.av);
     }
 
     @Override
@@ -186,7 +262,7 @@ final class ThirdTypeResponse implements UnitResponse {
         final Point p = new Point(x, t);
         final double bracket = ErrorFunctions.erfcx(p.bv) * (1 - 2 * p.av * p.q)
             - ErfcxIntegrals.psi(p.bv) - 2 * ErfcxIntegrals.phi(p.bv) * (p.av + p.q);
-        return ScaledExp.value(2 * p.pv / t * p.s.inverseLength() * bracket, -mu / r * t,
+        return ScaledExp.value(2 * p.pv / t * p.s.inverseLength() * bracket, -muR * t,
             p.av);
     }
 
@@ -194,7 +270,7 @@ final class ThirdTypeResponse implements UnitResponse {
     public double flush(double x, double t) {
         // 1 − T₀ = ½·core(A_v, B_v), the decay-free complement
         final Spread s = Spread.of(d, r, t);
-        return 0.5 * core(s.scaled(x - v / r * t), s.scaled(x + v / r * t));
+        return 0.5 * core(s.scaled(x - vR * t), s.scaled(x + vR * t));
     }
 
     @Override

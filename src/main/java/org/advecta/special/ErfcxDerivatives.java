@@ -16,8 +16,10 @@ import org.apache.commons.numbers.gamma.Erfcx;
  * √π·erfcx(x) = 1/(x + K₁),   K_i = (i/2) / (x + K_{i+1})
  * </pre>
  * gives them without cancellation: √π·φ = K₁/(x + K₁) and √π·ψ = K₂/((x + K₂)(x + K₁)).
- * The fraction is used below 3/2 (ψ from 3/4); a Chebyshev series in 1/x takes over on
- * [3/2, 10), where it is cheaper, and the asymptotic series beyond.
+ * ψ uses the fraction on [3/4, 3/2); a Chebyshev series in 1/x takes over on [3/2, 10),
+ * where it is cheaper, and the asymptotic series beyond. φ comes from the rational
+ * approximations of {@link ErfcxRational} on [1/2, 10), cheaper still, and from the same
+ * asymptotic series beyond.
  * The fraction is summed backward from ⌈180/x² + 100/x⌉ + 8 terms, which mpmath shows is
  * enough for 4 units of 2⁻⁵³ at x ≥ 1/2 (it converges more slowly as x decreases). From
  * x = 10 on, the asymptotic series (A&amp;S 7.1.23, differentiated)
@@ -32,14 +34,14 @@ final class ErfcxDerivatives {
     /** 1/√π. */
     private static final double ONE_OVER_SQRT_PI = 0.5641895835477563;
     /**
-     * φ by the fraction from here up; below, 1/√π − x·erfcx(x) loses at most a factor
-     * (1/√π)/φ(3/2) ≈ 7 to cancellation.
+     * φ from {@link ErfcxRational} from here up; below, 1/√π − x·erfcx(x) loses at most a
+     * factor (1/√π)/φ(1/2) ≈ 2 to cancellation.
      */
-    private static final double PHI_FRACTION_FROM = 1.5;
+    private static final double PHI_RATIONAL_FROM = 0.5;
     /** ψ by the fraction from here up; below, the direct form loses at most a factor 5. */
     /**
-     * On [3/2, 10) φ and ψ come from Chebyshev series in y = 1/x ∈ (1/10, 2/3] of x²φ and
-     * x³ψ, 32 terms each, computed by gen_erfcx_chebyshev.py (beside the test fixtures) at 60
+     * On [3/2, 10) ψ comes from a Chebyshev series in y = 1/x ∈ (1/10, 2/3] of x³ψ, 32
+     * terms, computed by gen_erfcx_chebyshev.py (beside the test fixtures) at 60
      * digits; truncation error below 1e-20 relative there. Clenshaw's recurrence costs 32
      * fused multiply-adds, against up to 155 divisions for the continued fraction.
      */
@@ -49,40 +51,6 @@ final class ErfcxDerivatives {
     /** Upper end of that interval, 2/3. */
     private static final double Y_HIGH = 2.0 / 3.0;
 
-    // x²φ(x), max relative truncation error 1.08e-21
-    private static final double[] PHI_CHEBYSHEV = {
-        0.23345980978066777,
-        -0.04843782192344758,
-        -0.002223689701512303,
-        0.0014926429921290447,
-        -0.00022237141878917287,
-        1.943411505301281e-06,
-        6.780470868926906e-06,
-        -1.7001205245873127e-06,
-        1.804341728101837e-07,
-        1.8597267340504244e-08,
-        -1.260739329324923e-08,
-        2.8414651209972215e-09,
-        -2.85123769987176e-10,
-        -4.3698559279089385e-11,
-        2.741720549365254e-11,
-        -6.734017934367559e-12,
-        8.477269567564014e-13,
-        6.156954673302219e-14,
-        -6.614828411796805e-14,
-        1.9916135343293965e-14,
-        -3.465987725686907e-15,
-        1.3762204067521409e-16,
-        1.479556465473217e-16,
-        -6.335728919850273e-17,
-        1.52442737523274e-17,
-        -2.0383308678552574e-18,
-        -1.3908979509365255e-19,
-        1.808763316667885e-19,
-        -6.312371705138843e-20,
-        1.384156769995661e-20,
-        -1.5502681177801382e-21,
-        -2.664890620268316e-22};
     // x³ψ(x), max relative truncation error 6.31e-21
     private static final double[] PSI_CHEBYSHEV = {
         0.4021469157004202,
@@ -143,14 +111,8 @@ final class ErfcxDerivatives {
         if (x >= ASYMPTOTIC_FROM) {
             return asymptotic(x, false);
         }
-        if (x >= CHEBYSHEV_FROM) {
-            // φ = y²·g(y), y = 1/x
-            final double y = 1 / x;
-            return y * y * clenshaw(PHI_CHEBYSHEV, y);
-        }
-        if (x >= PHI_FRACTION_FROM) {
-            final double k1 = 0.5 / (x + tail(x));
-            return ONE_OVER_SQRT_PI * (k1 / (x + k1));
+        if (x >= PHI_RATIONAL_FROM) {
+            return ErfcxRational.phi(x);
         }
         // NaN falls through: erfcx(NaN) is NaN
         return ONE_OVER_SQRT_PI - x * Erfcx.value(x);
