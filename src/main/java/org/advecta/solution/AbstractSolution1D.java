@@ -17,9 +17,13 @@ abstract class AbstractSolution1D implements Solution1D {
     final double dispersion;
     /** R. */
     final double retardation;
+    /** v/R, the speed of a solute front (divided once here, not at every point). */
+    final double drift;
     /** μ/R, the decay rate of the dissolved concentration of a released mass. */
     final double decayPerRetardation;
     private final Domain domain;
+    /** The smallest valid x. */
+    private final double lowestX;
 
     AbstractSolution1D(TransportParameters parameters, Domain domain) {
         if (parameters == null) {
@@ -29,8 +33,10 @@ abstract class AbstractSolution1D implements Solution1D {
         this.velocity = parameters.velocity();
         this.dispersion = parameters.dispersion();
         this.retardation = parameters.retardation();
+        this.drift = parameters.velocity() / parameters.retardation();
         this.decayPerRetardation = parameters.decayRate() / parameters.retardation();
         this.domain = domain;
+        this.lowestX = domain == Domain.HALF_LINE ? 0.0 : -Double.MAX_VALUE;
     }
 
     @Override
@@ -95,11 +101,15 @@ abstract class AbstractSolution1D implements Solution1D {
     }
 
     private void checkPoint(double x, double t) {
-        if (domain == Domain.HALF_LINE) {
-            Checks.nonNegative("x", x);
-        } else {
-            Checks.finite("x", x);
+        // one test for the valid case (this runs at every point), the messages after it
+        if (!(x >= lowestX && x < Double.POSITIVE_INFINITY && t >= 0
+            && t < Double.POSITIVE_INFINITY)) {
+            if (domain == Domain.HALF_LINE) {
+                Checks.nonNegative("x", x);
+            } else {
+                Checks.finite("x", x);
+            }
+            Checks.nonNegative("t", t);
         }
-        Checks.nonNegative("t", t);
     }
 }

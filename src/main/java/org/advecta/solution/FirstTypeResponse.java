@@ -103,7 +103,9 @@ final class FirstTypeResponse implements UnitResponse {
         }
         // erfc(A_u) ≥ erfc(1/2) ≈ 0.48 costs no exponential here, and e^{s₁+shift} is 1 when
         // μ = 0 and the input is constant (ScaledExp then skips it)
-        return ScaledExp.value(0.5 * ErrorFunctions.erfc(au), s1(x) + shift, 0.0)
+        final double e = s1(x) + shift;
+        final double first = 0.5 * ErrorFunctions.erfc(au);
+        return (e == 0 ? first : ScaledExp.value(first, e, 0.0))
             + ScaledExp.value(second, trueDecay(t), av);
     }
 

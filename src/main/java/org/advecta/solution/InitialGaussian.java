@@ -53,7 +53,7 @@ public final class InitialGaussian extends AbstractSolution1D {
     @Override
     double valueAt(double x, double t) {
         final Spread s = spread(t);
-        final double xi = x - Math.fma(velocity / retardation, t, centre);
+        final double xi = x - Math.fma(drift, t, centre);
         final double qh = s.exponentHigh(xi);
         return mass * ScaledExp.valueOfSplit(s.norm, decayExponent(t), qh, s.exponentLow(xi, qh));
     }
@@ -62,7 +62,7 @@ public final class InitialGaussian extends AbstractSolution1D {
     double gradientAt(double x, double t) {
         // ∂c/∂x = −ξ/S² · c = −2ξ · (1/(2S²)) · c
         final Spread s = spread(t);
-        final double xi = x - Math.fma(velocity / retardation, t, centre);
+        final double xi = x - Math.fma(drift, t, centre);
         final double qh = s.exponentHigh(xi);
         // the factor −2ξ/(2S²)·M goes into the multiplier: no subnormal c is formed first
         return ScaledExp.valueOfSplit(s.norm * (-2 * xi * s.high * mass), decayExponent(t), qh,

@@ -66,7 +66,7 @@ public final class InitialSlug extends AbstractSolution1D {
     @Override
     double valueAt(double x, double t) {
         final Spread s = Spread.of(dispersion, retardation, t);
-        final double m = s.scaled(x - Math.fma(velocity / retardation, t, middle));
+        final double m = s.scaled(x - Math.fma(drift, t, middle));
         final double h = s.scaled(halfWidth);
         final double diff = ErrorFunctions.erfDifferenceCentred(m, h);
         return c0 * (0.5 * diff * Math.exp(decayExponent(t)));
@@ -75,7 +75,7 @@ public final class InitialSlug extends AbstractSolution1D {
     @Override
     double gradientAt(double x, double t) {
         final Spread s = Spread.of(dispersion, retardation, t);
-        final double m = s.scaled(x - Math.fma(velocity / retardation, t, middle));
+        final double m = s.scaled(x - Math.fma(drift, t, middle));
         final double h = s.scaled(halfWidth);
         final double scale = s.inverseLength() / SQRT_PI;
         final double decay = decayExponent(t);

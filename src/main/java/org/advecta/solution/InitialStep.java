@@ -99,7 +99,7 @@ public final class InitialStep extends AbstractSolution1D {
     }
 
     private double centre(double t) {
-        return Math.fma(velocity / retardation, t, x0);
+        return Math.fma(drift, t, x0);
     }
 
     private static final double SQRT_PI = Math.sqrt(Math.PI);
