@@ -1,6 +1,7 @@
 package org.advecta.solution;
 
 import org.advecta.internal.Checks;
+import org.advecta.internal.Spread;
 import org.advecta.transport.TransportParameters;
 
 /**
@@ -55,6 +56,30 @@ abstract class AbstractSolution1D implements Solution1D {
         return t == 0 ? initialValue(x) : valueAt(x, t);
     }
 
+    /**
+     * A profile at one time: the time's own quantities (the spread) are computed once, and
+     * each point costs only its own part. Gives the same doubles as {@link #value} point by
+     * point.
+     */
+    @Override
+    public void values(double[] x, double t, double[] out) {
+        Checks.length("x", x, 0);
+        Checks.length("out", out, x.length);
+        Checks.nonNegative("t", t);
+        if (t == 0) {
+            for (int i = 0; i < x.length; i++) {
+                out[i] = value(x[i], 0.0);
+            }
+            return;
+        }
+        final Spread s = spreadAt(t);
+        for (int i = 0; i < x.length; i++) {
+            final double xi = x[i];
+            checkPoint(xi, t);
+            out[i] = valueAt(xi, t, s);
+        }
+    }
+
     @Override
     public final double gradient(double x, double t) {
         checkPoint(x, t);
@@ -69,6 +94,32 @@ abstract class AbstractSolution1D implements Solution1D {
      * @return c
      */
     abstract double valueAt(double x, double t);
+
+    /**
+     * Returns c(x, t) for valid x and t &gt; 0, given the time's quantities from
+     * {@link #spreadAt(double)}. Families whose formula uses the spread of the moving
+     * Gaussian override this (and compute {@link #valueAt(double, double)} through it), so
+     * that a profile computes it once.
+     *
+     * @param x position
+     * @param t time, &gt; 0
+     * @param s {@code spreadAt(t)}
+     * @return c
+     */
+    double valueAt(double x, double t, Spread s) {
+        return valueAt(x, t);
+    }
+
+    /**
+     * Returns what {@link #valueAt(double, double, Spread)} needs of the time t &gt; 0: the
+     * spread with this solution's D and R, or null where no spread is used.
+     *
+     * @param t time, &gt; 0
+     * @return the spread, or null
+     */
+    Spread spreadAt(double t) {
+        return Spread.of(dispersion, retardation, t);
+    }
 
     /**
      * Returns ∂c/∂x for valid x and t &gt; 0.

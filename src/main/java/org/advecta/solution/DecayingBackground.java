@@ -1,6 +1,7 @@
 package org.advecta.solution;
 
 import org.advecta.internal.Checks;
+import org.advecta.internal.Spread;
 import org.advecta.transport.TransportParameters;
 
 /**
@@ -35,6 +36,11 @@ public final class DecayingBackground extends AbstractSolution1D {
     @Override
     double valueAt(double x, double t) {
         return level * Math.exp(decayExponent(t));
+    }
+
+    @Override
+    Spread spreadAt(double t) {
+        return null; // uniform: no Gaussian
     }
 
     @Override

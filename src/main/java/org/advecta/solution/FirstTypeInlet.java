@@ -1,5 +1,6 @@
 package org.advecta.solution;
 
+import org.advecta.internal.Spread;
 import org.advecta.transport.TransportParameters;
 
 /**
@@ -91,9 +92,9 @@ public final class FirstTypeInlet extends InletSolution {
     }
 
     @Override
-    double valueAt(double x, double t) {
+    double valueAt(double x, double t, Spread s) {
         // the inlet holds the input exactly: c(0, t) = g(t) (the formula gives it to 1 ulp)
-        return x == 0 ? input.valueAt(t) : super.valueAt(x, t);
+        return x == 0 ? input.valueAt(t) : super.valueAt(x, t, s);
     }
 
     @Override

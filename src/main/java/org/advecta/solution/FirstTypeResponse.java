@@ -92,7 +92,11 @@ final class FirstTypeResponse implements UnitResponse {
 
     @Override
     public double value(double x, double t, double shift) {
-        final Spread s = Spread.of(d, r, t);
+        return value(x, t, shift, Spread.of(d, r, t));
+    }
+
+    @Override
+    public double value(double x, double t, double shift, Spread s) {
         final double au = s.scaled(x - uR * t);
         final double bu = s.scaled(x + uR * t);
         final double av = s.scaled(x - vR * t);

@@ -52,7 +52,16 @@ public final class InitialGaussian extends AbstractSolution1D {
 
     @Override
     double valueAt(double x, double t) {
-        final Spread s = spread(t);
+        return valueAt(x, t, spread(t));
+    }
+
+    @Override
+    Spread spreadAt(double t) {
+        return spread(t);
+    }
+
+    @Override
+    double valueAt(double x, double t, Spread s) {
         final double xi = x - Math.fma(drift, t, centre);
         final double qh = s.exponentHigh(xi);
         return mass * ScaledExp.valueOfSplit(s.norm, decayExponent(t), qh, s.exponentLow(xi, qh));

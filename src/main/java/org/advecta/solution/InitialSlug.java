@@ -65,7 +65,11 @@ public final class InitialSlug extends AbstractSolution1D {
 
     @Override
     double valueAt(double x, double t) {
-        final Spread s = Spread.of(dispersion, retardation, t);
+        return valueAt(x, t, Spread.of(dispersion, retardation, t));
+    }
+
+    @Override
+    double valueAt(double x, double t, Spread s) {
         final double m = s.scaled(x - Math.fma(drift, t, middle));
         final double h = s.scaled(halfWidth);
         final double diff = ErrorFunctions.erfDifferenceCentred(m, h);

@@ -71,7 +71,11 @@ public final class InitialStep extends AbstractSolution1D {
 
     @Override
     double valueAt(double x, double t) {
-        final Spread s = Spread.of(dispersion, retardation, t);
+        return valueAt(x, t, Spread.of(dispersion, retardation, t));
+    }
+
+    @Override
+    double valueAt(double x, double t, Spread s) {
         final double a = sign() * s.scaled(x - centre(t));
         return c0 * (0.5 * ExpErfc.value(decayExponent(t), a));
     }

@@ -2,6 +2,7 @@ package org.advecta.solution;
 
 import org.advecta.internal.Checks;
 import org.advecta.internal.GaussLegendre;
+import org.advecta.internal.Spread;
 import org.advecta.transport.TransportParameters;
 
 /**
@@ -79,7 +80,18 @@ abstract class InletSolution extends AbstractSolution1D {
 
     @Override
     double valueAt(double x, double t) {
-        final double fromInput = level == 0 ? 0.0 : level * inputResponse(x, t);
+        return valueAt(x, t, spreadAt(t));
+    }
+
+    @Override
+    Spread spreadAt(double t) {
+        // a pulse evaluates the response at two times, each with its own spread
+        return kind == InletInput.Kind.PULSE ? null : Spread.of(dispersion, retardation, t);
+    }
+
+    @Override
+    double valueAt(double x, double t, Spread s) {
+        final double fromInput = level == 0 ? 0.0 : level * inputResponse(x, t, s);
         if (initial == 0) {
             return fromInput;
         }
@@ -97,11 +109,11 @@ abstract class InletSolution extends AbstractSolution1D {
 
     // Plain comparisons of the kind held in a field rather than a switch on the enum: these
     // run at every point of a profile, and the switch's lookup table is a load more.
-    private double inputResponse(double x, double t) {
+    private double inputResponse(double x, double t, Spread s) {
         if (kind == InletInput.Kind.CONSTANT) {
-            return response.value(x, t, 0.0);
+            return response.value(x, t, 0.0, s);
         }
-        return kind == InletInput.Kind.PULSE ? pulse(x, t) : response.value(x, t, -rate * t);
+        return kind == InletInput.Kind.PULSE ? pulse(x, t) : response.value(x, t, -rate * t, s);
     }
 
     private double inputResponseGradient(double x, double t) {

@@ -89,9 +89,13 @@ final class ThirdTypeResponse implements UnitResponse {
 
     @Override
     public double value(double x, double t, double shift) {
+        return value(x, t, shift, Spread.of(d, r, t));
+    }
+
+    @Override
+    public double value(double x, double t, double shift, Spread s) {
         // The formula of the class comment with local variables only (no Point: this runs at
         // every point of a profile, and the allocation would cost as much as the formula).
-        final Spread s = Spread.of(d, r, t);
         if (mu == 0 && shift == 0) {
             final double undecayed = withoutDecay(x, t, s);
             if (undecayed == undecayed) {

@@ -1,5 +1,7 @@
 package org.advecta.solution;
 
+import org.advecta.internal.Spread;
+
 /**
  * The response R(x, t) of an inlet problem to a unit constant input switched on at t = 0 into
  * a clean half-line, for one decay coefficient μ_e, with the pieces that the input shapes and
@@ -9,6 +11,11 @@ interface UnitResponse {
 
     /** Returns exp(shift)·R(x, t), with the shift folded into the exponent. */
     double value(double x, double t, double shift);
+
+    /**
+     * Returns exp(shift)·R(x, t) given s = Spread.of(D, R, t) (computed once for a profile).
+     */
+    double value(double x, double t, double shift, Spread s);
 
     /** Returns exp(shift)·∂R/∂x. */
     double gradient(double x, double t, double shift);

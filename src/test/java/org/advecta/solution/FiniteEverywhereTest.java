@@ -16,13 +16,13 @@ import org.junit.jupiter.api.Test;
  */
 class FiniteEverywhereTest {
 
-    private static final double[] V = {-1e8, -1e3, -1, -1e-3, 0, 1e-6, 1e-3, 0.1, 1, 10, 1e3,
+    static final double[] V = {-1e8, -1e3, -1, -1e-3, 0, 1e-6, 1e-3, 0.1, 1, 10, 1e3,
         1e5, 1e8};
-    private static final double[] D = {1e-6, 1e-3, 1e-1, 1, 10, 1e3};
-    private static final double[] R = {1, 3, 100};
-    private static final double[] MU = {0, 1e-6, 1, 1e3};
-    private static final double[] X = {0, 1e-6, 1e-3, 0.1, 1, 10, 1e2, 1e4};
-    private static final double[] T = {1e-8, 1e-4, 1e-2, 1, 1e2, 1e4, 1e8};
+    static final double[] D = {1e-6, 1e-3, 1e-1, 1, 10, 1e3};
+    static final double[] R = {1, 3, 100};
+    static final double[] MU = {0, 1e-6, 1, 1e3};
+    static final double[] X = {0, 1e-6, 1e-3, 0.1, 1, 10, 1e2, 1e4};
+    static final double[] T = {1e-8, 1e-4, 1e-2, 1, 1e2, 1e4, 1e8};
 
     @Test
     void everyFamilyIsFiniteOnALogGridOfAHundredThousandCombinations() {
@@ -54,7 +54,7 @@ class FiniteEverywhereTest {
             failures.size() + " non-finite results");
     }
 
-    private static List<Solution1D> families(TransportParameters p) {
+    static List<Solution1D> families(TransportParameters p) {
         final List<Solution1D> list = new ArrayList<>();
         list.add(InitialStep.of(p, 0.5, 1, InitialStep.Side.LEFT));
         list.add(InitialSlug.of(p, -1, 1e-3, 2));
