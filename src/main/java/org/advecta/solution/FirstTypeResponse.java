@@ -65,6 +65,11 @@ final class FirstTypeResponse implements UnitResponse {
         this.k0 = vMinusU0 / (2 * d);
     }
 
+    /** e^{s₁}, without an exponential when μ = 0 (s₁ = 0, the steady state is 1). */
+    private double expS1(double x) {
+        return k == 0 ? 1.0 : Math.exp(s1(x));
+    }
+
     /** s₁ = (v − u)x/(2D). */
     private double s1(double x) {
         return k * x;
@@ -190,9 +195,18 @@ final class FirstTypeResponse implements UnitResponse {
             - ScaledExp.value(bracket / (4 * pv), trueDecay(t), av);
     }
 
+    /**
+     * A_u &lt; 0, i.e. x &lt; ut/R: then erfc(A_u) &gt; 1 and the first term alone exceeds
+     * e^{s₁}/2, half the steady state.
+     */
+    @Override
+    public boolean pastHalfSteady(double x, double t) {
+        return x < uR * t;
+    }
+
     @Override
     public double steady(double x) {
-        return Math.exp(s1(x));
+        return expS1(x);
     }
 
     @Override
@@ -200,7 +214,7 @@ final class FirstTypeResponse implements UnitResponse {
         // F(∞) − F(t) = e^{s1}·½[erfc(−A_u) − e^{−A_u²}erfcx(B_u)] = e^{s1}·J(−A_u, B_u)
         // −A_u and B_u are P_u ∓ Q with P_u = ut/(RL), Q = x/L: pass those, not x ± ut/R
         final Spread s = Spread.of(d, r, t);
-        return Math.exp(s1(x)) * ErfcxIntegrals.jCentred(s.scaled(uR * t), s.scaled(x));
+        return expS1(x) * ErfcxIntegrals.jCentred(s.scaled(uR * t), s.scaled(x));
     }
 
     @Override

@@ -140,9 +140,11 @@ abstract class InletSolution extends AbstractSolution1D {
         if (narrowInTime(x, t1, t)) {
             return integrate(x, t1, t, false);
         }
-        final double now = response.value(x, t, 0.0);
-        if (now <= 0.5 * response.steady(x)) {
-            return now - response.value(x, t1, 0.0);
+        if (!response.pastHalfSteady(x, t)) {
+            final double now = response.value(x, t, 0.0);
+            if (now <= 0.5 * response.steady(x)) {
+                return now - response.value(x, t1, 0.0);
+            }
         }
         return response.complement(x, t1) - response.complement(x, t);
     }
@@ -156,7 +158,8 @@ abstract class InletSolution extends AbstractSolution1D {
         if (narrowInTime(x, t1, t)) {
             return integrate(x, t1, t, true);
         }
-        if (response.value(x, t, 0.0) <= 0.5 * response.steady(x)) {
+        if (!response.pastHalfSteady(x, t)
+            && response.value(x, t, 0.0) <= 0.5 * response.steady(x)) {
             return response.gradient(x, t, 0.0) - response.gradient(x, t1, 0.0);
         }
         // after the front both gradients are near the steady state's

@@ -20,6 +20,14 @@ interface UnitResponse {
     /** Returns exp(shift)·∂R/∂x. */
     double gradient(double x, double t, double shift);
 
+    /**
+     * Returns true only if R(x, t) &gt; R(x, ∞)/2 is certain without evaluating R (false means
+     * "unknown"): a pulse then takes the difference of complements at once.
+     */
+    default boolean pastHalfSteady(double x, double t) {
+        return false;
+    }
+
     /** Returns R(x, ∞) (the steady state; for μ_e ≥ 0 only). */
     double steady(double x);
 
