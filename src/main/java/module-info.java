@@ -15,4 +15,5 @@ module org.advecta {
     exports org.advecta.kernel;
     exports org.advecta.solution;
     exports org.advecta.verify;
+    exports org.advecta.moments;
 }
