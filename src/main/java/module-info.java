@@ -9,6 +9,8 @@
  */
 module org.advecta {
     requires org.apache.commons.numbers.gamma;
+    // Optional: only org.advecta.fit uses it, and checks for it at run time.
+    requires static commons.math3;
 
     exports org.advecta.special;
     exports org.advecta.transport;
@@ -16,4 +18,5 @@ module org.advecta {
     exports org.advecta.solution;
     exports org.advecta.verify;
     exports org.advecta.moments;
+    exports org.advecta.fit;
 }
