@@ -182,7 +182,7 @@ final class LevenbergMarquardtFit {
             try {
                 model.solution(start);
                 why = "it gives a value that is not finite at some observation";
-            } catch (IllegalArgumentException e) {
+            } catch (IllegalArgumentException | IllegalStateException e) {
                 why = e.getMessage();
             }
             return failure(FitStatus.MODEL_FAILED, "the model cannot be evaluated at the"
@@ -225,6 +225,11 @@ final class LevenbergMarquardtFit {
         final int k = free.size();
         final double[] values = ev.parameters(theta);
         final double[] m = ev.weightedModel(theta);
+        if (m == null) {
+            return failure(FitStatus.NOT_CONVERGED, "the optimiser ended where the model"
+                + " cannot be evaluated; try other starting values", model, free, values, cs,
+                ev, null);
+        }
         final double[] residuals = new double[n];
         double rss = 0;
         double sw = 0;

@@ -166,7 +166,11 @@ public final class TransportModel {
                 all[Parameter.DISPERSION.ordinal()])
             .withRetardation(all[Parameter.RETARDATION.ordinal()])
             .withDecay(all[Parameter.DECAY.ordinal()]);
-        return family.create(p, all[Parameter.SOURCE.ordinal()]);
+        final Solution1D s = family.create(p, all[Parameter.SOURCE.ordinal()]);
+        if (s == null) {
+            throw new IllegalStateException("family: the builder returned null");
+        }
+        return s;
     }
 
     /** The model's prediction at one observation. */

@@ -274,6 +274,29 @@ class ParameterFitTest {
         assertTrue(fit.message().contains("v = -0.5"), fit.message());
     }
 
+    @Test
+    void customFamiliesFitFromGivenStartingValues() {
+        final ModelFamily custom = ModelFamily.custom((p, m) -> org.advecta.solution
+            .InitialGaussian.of(p, 0.0, 0.05, m));
+        final Solution1D truth = custom.create(TransportParameters.of(0.4, 0.02), 2.0);
+        final double[] x = grid(-0.5, 3, 40);
+        final double[] c = new double[x.length];
+        truth.values(x, 2.0, c);
+        final FitResult fit = ParameterFit.fit(TransportModel.of(custom, Observable.RESIDENT)
+            .withFree(Parameter.VELOCITY, Parameter.DISPERSION, Parameter.SOURCE)
+            .withValue(Parameter.VELOCITY, 0.3).withValue(Parameter.DISPERSION, 0.01)
+            .withValue(Parameter.SOURCE, 1.0), Observations.profile(2.0, x, c));
+        assertRecovered(fit, Parameter.VELOCITY, 0.4);
+        assertRecovered(fit, Parameter.DISPERSION, 0.02);
+        assertRecovered(fit, Parameter.SOURCE, 2.0);
+        // a builder that returns null is a failed model, not an exception
+        final FitResult broken = ParameterFit.fit(TransportModel.of(
+                ModelFamily.custom((p, m) -> null), Observable.RESIDENT)
+            .withValue(Parameter.VELOCITY, 0.3).withValue(Parameter.DISPERSION, 0.01),
+            Observations.profile(2.0, x, c));
+        assertEquals(FitStatus.MODEL_FAILED, broken.status(), broken::toString);
+    }
+
     private static void assertMessage(String expected,
                                       org.junit.jupiter.api.function.Executable call) {
         final IllegalArgumentException e = assertThrows(IllegalArgumentException.class, call);
