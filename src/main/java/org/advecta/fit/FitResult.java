@@ -13,7 +13,8 @@ import org.advecta.solution.Solution1D;
  * <p>Statistics of a converged fit, with n points, k free parameters, weights wᵢ, residuals
  * rᵢ = cᵢ − model(xᵢ, tᵢ) and J the n×k Jacobian of the model with respect to the free
  * parameters (in their natural units) at the optimum (Seber &amp; Wild 1989, <i>Nonlinear
- * Regression</i>, §2.1 and §5.1; Bates &amp; Watts 1988, §2.3):
+ * Regression</i>, §2.1 and §5.1; Bates &amp; Watts 1988, <i>Nonlinear Regression Analysis and
+ * Its Applications</i>, §2.3; section numbers recalled from memory):
  * <pre>
  * s²  = Σ wᵢrᵢ² / (n − k)
  * Cov = s²·(JᵀWJ)⁻¹,   SEⱼ = √Covⱼⱼ,   ρⱼₗ = Covⱼₗ / (SEⱼ·SEₗ)
