@@ -9,9 +9,14 @@
  */
 module org.advecta {
     requires org.apache.commons.numbers.gamma;
+    // Optional: only org.advecta.fit uses it, and checks for it at run time.
+    requires static commons.math3;
 
     exports org.advecta.special;
     exports org.advecta.transport;
     exports org.advecta.kernel;
     exports org.advecta.solution;
+    exports org.advecta.verify;
+    exports org.advecta.moments;
+    exports org.advecta.fit;
 }

@@ -50,6 +50,33 @@ public final class InitialGaussian extends AbstractSolution1D {
         return new InitialGaussian(parameters, centre, width, mass);
     }
 
+    /**
+     * Returns the centre x_c of the plume at t = 0.
+     *
+     * @return x_c
+     */
+    public double centre() {
+        return centre;
+    }
+
+    /**
+     * Returns the standard deviation s₀ of the plume at t = 0.
+     *
+     * @return s₀
+     */
+    public double width() {
+        return width;
+    }
+
+    /**
+     * Returns the mass M, the integral of c(x, 0).
+     *
+     * @return M
+     */
+    public double mass() {
+        return mass;
+    }
+
     @Override
     double valueAt(double x, double t) {
         return valueAt(x, t, spread(t));

@@ -63,6 +63,33 @@ public final class InitialSlug extends AbstractSolution1D {
         return new InitialSlug(parameters, a, b, c0);
     }
 
+    /**
+     * Returns the left end a of the slug at t = 0.
+     *
+     * @return a
+     */
+    public double left() {
+        return a;
+    }
+
+    /**
+     * Returns the right end b of the slug at t = 0.
+     *
+     * @return b
+     */
+    public double right() {
+        return b;
+    }
+
+    /**
+     * Returns the concentration C₀ in the slug at t = 0.
+     *
+     * @return C₀
+     */
+    public double concentration() {
+        return c0;
+    }
+
     @Override
     double valueAt(double x, double t) {
         return valueAt(x, t, Spread.of(dispersion, retardation, t));

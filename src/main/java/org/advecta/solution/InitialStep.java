@@ -65,6 +65,33 @@ public final class InitialStep extends AbstractSolution1D {
         return new InitialStep(parameters, x0, c0, side);
     }
 
+    /**
+     * Returns the position x₀ of the step.
+     *
+     * @return x₀
+     */
+    public double position() {
+        return x0;
+    }
+
+    /**
+     * Returns the concentration C₀ on the loaded side.
+     *
+     * @return C₀
+     */
+    public double concentration() {
+        return c0;
+    }
+
+    /**
+     * Returns which side is loaded at t = 0.
+     *
+     * @return the side
+     */
+    public Side side() {
+        return side;
+    }
+
     private double sign() {
         return side == Side.LEFT ? 1.0 : -1.0;
     }
