@@ -71,8 +71,9 @@ public final class Spread {
         this.collapsed = !(h <= 1 / COLLAPSE);
         this.high = h;
         this.low = (rem - h * pLow) * invP;
-        // 1/L = √(R/(4Dt)) from the correctly rounded high + low: within 3/4 ulp
-        final double s = Math.sqrt(h + this.low);
+        // 1/L = √(R/(4Dt)) from the leading part alone, within 1 ulp: adding the low part
+        // first would lengthen the chain of dependent operations before every erfc
+        final double s = Math.sqrt(h);
         this.norm = s * ONE_OVER_SQRT_PI;
         this.inverseLength = s;
     }
@@ -84,14 +85,15 @@ public final class Spread {
     private final double inverseLength;
 
     /**
-     * Returns ξ/L = ξ·√(R/(4Dt)), within 5/4 ulp.
+     * Returns ξ/L = ξ·√(R/(4Dt)), within 3/2 ulp.
      *
      * <p>Why not in double-double, as the exponents are: a scaled distance w enters the
      * solutions as erfc(w) or exp(−w²), whose relative error from a relative error δ in w is
      * about 2w²δ; their condition number with respect to D alone is already w², so the
-     * 5/4-ulp w costs at most 5/4 of the 2κ-ULP contract's own budget, while carrying 1/L in
-     * double-double costs a division on every evaluation (about a sixth of a step solution's
-     * time). The reference fixtures measure the result (README's accuracy table).
+     * 3/2-ulp w costs at most 3/2 of the 2κ-ULP contract's own budget, while carrying 1/L in
+     * double-double costs a division and a chain of dependent operations on every
+     * evaluation (about a sixth of a step solution's time). The reference fixtures measure
+     * the result (README's accuracy table).
      *
      * @param xi a distance
      * @return the scaled distance
