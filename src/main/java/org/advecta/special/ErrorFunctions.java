@@ -119,10 +119,12 @@ public final class ErrorFunctions {
      * </pre>
      *
      * <p>Narrow intervals off the origin (h &lt; 1/2 and 4|m|h &lt; 1, so that exp(−s²) changes
-     * by less than a factor e across them, and |m| &gt; 3h) use the Taylor series of erf about
-     * m (in Hermite polynomials, summed to 2⁻⁶⁰ relative). The others use {@link #erfDifference(double, double)},
+     * by less than a factor e across them, and |m| &gt; 3h, and 8|m|h &lt; 1 where both ends
+     * exceed the x of erf(x) = 1/2) use the Taylor series of erf about m (in Hermite
+     * polynomials, summed to 2⁻⁶⁰ relative). The others use {@link #erfDifference(double, double)},
      * which then cannot cancel badly: for |m| ≤ 3h the two erf values either differ in sign
-     * or differ by at least a third of their sum.
+     * or differ by at least a third of their sum, and two erfc values beyond erf = 1/2 with
+     * 8|m|h ≥ 1 differ by at least a quarter of theirs.
      *
      * <p>Special cases: NaN if m or h is NaN or h &lt; 0; 0 for h = 0; erf(±∞)
      * differences for infinite h.
@@ -139,7 +141,8 @@ public final class ErrorFunctions {
             return Double.NaN;
         }
         final double am = Math.abs(m);
-        if (h < NARROW_HALF_WIDTH && 4 * am * h < 1 && am > 3 * h) {
+        if (h < NARROW_HALF_WIDTH && 4 * am * h < 1 && am > 3 * h
+            && (am - h < ERFC_FROM || 8 * am * h < 1)) {
             return narrowErfDifference(m, h);
         }
         return ErfDifference.value(m - h, m + h);
@@ -187,7 +190,14 @@ public final class ErrorFunctions {
         return 2 * ErfcxDerivatives.psi(x);
     }
 
-    /** Half-widths below this may use the quadrature of {@link #erfDifferenceCentred}. */
+    /**
+     * From here on (about the x where erf(x) = 1/2) Commons Numbers' ErfDifference takes the
+     * difference of erfc values, which loses at most a factor coth(2|m|h) ≤ 4 when
+     * 8|m|h ≥ 1.
+     */
+    private static final double ERFC_FROM = 0.4769362762044697;
+
+    /** Half-widths below this may use the series of {@link #erfDifferenceCentred}. */
     private static final double NARROW_HALF_WIDTH = 0.5;
     /** 2/√π. */
     private static final double TWO_OVER_SQRT_PI = 1.1283791670955126;
