@@ -6,12 +6,29 @@
  * overflow-free products they appear in), {@link org.advecta.transport} (the parameters of
  * the medium and flow), {@link org.advecta.kernel} (Green's functions of an instantaneous
  * release).
+ *
+ * <p>The command line (package {@code org.advecta.cli}, not exported) needs the modules
+ * required {@code static} below only when it runs; they are optional Maven dependencies,
+ * bundled in the runnable jar and never passed on to the library's consumers.
  */
+// JFreeChart 1.5 has no module descriptor (an automatic module), the only such requirement.
+@SuppressWarnings("requires-automatic")
 module org.advecta {
     requires org.apache.commons.numbers.gamma;
+
+    requires static info.picocli;
+    requires static com.fasterxml.jackson.databind;
+    requires static com.fasterxml.jackson.dataformat.toml;
+    requires static org.apache.commons.csv;
+    requires static org.jfree.jfreechart;
+    requires static org.jfree.svg;
+    requires static java.desktop;
 
     exports org.advecta.special;
     exports org.advecta.transport;
     exports org.advecta.kernel;
     exports org.advecta.solution;
+
+    // picocli reads the command classes' annotations reflectively.
+    opens org.advecta.cli to info.picocli;
 }
