@@ -193,7 +193,9 @@ final class Plots {
         g2.setDefsKeyPrefix("advecta");
         g2.setGeomDoubleConverter(v -> ParamSpec.format(Math.round(v * 100) / 100.0));
         chart.draw(g2, new Rectangle2D.Double(0, 0, WIDTH, HEIGHT));
-        out.write(g2.getSVGDocument().getBytes(StandardCharsets.UTF_8));
+        // The element without the SVG 1.1 DOCTYPE, whose external DTD a reader would fetch.
+        out.write(("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" + g2.getSVGElement() + "\n")
+            .getBytes(StandardCharsets.UTF_8));
     }
 
     private static void style(XYPlot plot) {

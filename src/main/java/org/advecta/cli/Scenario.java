@@ -112,6 +112,8 @@ final class Scenario {
     final Double level;
 
     private Scenario(Table root, String name) {
+        root.expect("title", "family", "units", "medium", "source", "profiles", "breakthrough",
+            "plan", "summary");
         final String familyName = root.string("family", null);
         if (familyName == null) {
             throw root.error("family", "missing (e.g. family = \"release-2d\"; see 'advecta list')");
@@ -122,7 +124,7 @@ final class Scenario {
             throw root.error("family", e.getMessage());
         }
         this.title = root.string("title", name);
-        final Table units = root.table("units", false);
+        final Table units = root.table("units", false).expect("length", "time", "concentration");
         this.length = units.string("length", "L");
         this.time = units.string("time", "T");
         this.concentration = units.string("concentration", "C");
@@ -152,7 +154,7 @@ final class Scenario {
         }
 
         final int d = family.dimensions();
-        final Table p = root.table("profiles", false);
+        final Table p = root.table("profiles", false).expect("times", "x", "y", "z");
         if (p.isPresent()) {
             final double[] times = p.numbers("times");
             for (int i = 0; i < times.length; i++) {
@@ -170,7 +172,7 @@ final class Scenario {
         }
         p.finish();
 
-        final Table b = root.table("breakthrough", false);
+        final Table b = root.table("breakthrough", false).expect("t", "at");
         if (b.isPresent()) {
             final Grid t = b.grid("t");
             if (!(t.from() >= 0)) {
@@ -179,7 +181,7 @@ final class Scenario {
             final List<Table> at = b.tables("at");
             final List<Probe> probes = new ArrayList<>();
             for (int i = 0; i < at.size(); i++) {
-                final Table a = at.get(i);
+                final Table a = at.get(i).expect("name", "x", "y", "z");
                 final double x = a.number("x");
                 requireDomain(a, "x", x);
                 probes.add(new Probe(a.string("name", "P" + (i + 1)), x,
@@ -192,7 +194,7 @@ final class Scenario {
         }
         b.finish();
 
-        final Table v = root.table("plan", false);
+        final Table v = root.table("plan", false).expect("time", "x", "y", "z");
         if (v.isPresent()) {
             if (d < 2) {
                 throw root.error("plan", "a plan view needs a 2D or 3D family ("
@@ -214,7 +216,7 @@ final class Scenario {
         }
         v.finish();
 
-        final Table s = root.table("summary", false);
+        final Table s = root.table("summary", false).expect("level");
         this.level = s.isPresent() ? s.optionalNumber("level") : null;
         if (level != null && !Double.isFinite(level)) {
             throw s.error("level", "must be finite");
@@ -301,6 +303,18 @@ final class Scenario {
         JsonNode get(String key) {
             used.add(key);
             return node == null ? null : node.get(key);
+        }
+
+        /** Rejects any key not in the list, before the table's values are read. */
+        Table expect(String... known) {
+            final List<String> allowed = List.of(known);
+            for (String key : keys()) {
+                if (!allowed.contains(key)) {
+                    throw error(key, "unknown key (known here: " + String.join(", ", known)
+                        + ")");
+                }
+            }
+            return this;
         }
 
         void finish() {
@@ -411,7 +425,7 @@ final class Scenario {
         }
 
         Grid grid(String key) {
-            final Table g = table(key, true);
+            final Table g = table(key, true).expect("from", "to", "points");
             final double from = g.number("from");
             final double to = g.number("to");
             final JsonNode pn = g.get("points");
