@@ -11,7 +11,8 @@
  * required {@code static} below only when it runs; they are optional Maven dependencies,
  * bundled in the runnable jar and never passed on to the library's consumers.
  */
-// JFreeChart 1.5 has no module descriptor (an automatic module), the only such requirement.
+// JFreeChart 1.5 and Batik 1.19 have no module descriptors (automatic modules); only the
+// command line uses them.
 @SuppressWarnings("requires-automatic")
 module org.advecta {
     requires org.apache.commons.numbers.gamma;
@@ -21,8 +22,9 @@ module org.advecta {
     requires static com.fasterxml.jackson.dataformat.toml;
     requires static org.apache.commons.csv;
     requires static org.jfree.jfreechart;
-    requires static org.jfree.svg;
+    requires static org.apache.xmlgraphics.batik.svggen;
     requires static java.desktop;
+    requires static java.xml;
 
     exports org.advecta.special;
     exports org.advecta.transport;

@@ -2,15 +2,28 @@ package org.advecta.cli;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
+import java.awt.Dimension;
 import java.awt.Font;
 import java.awt.Paint;
 import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
+import java.awt.image.RenderedImage;
 import java.io.IOException;
 import java.io.OutputStream;
+import java.io.OutputStreamWriter;
+import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
+import javax.imageio.ImageIO;
+import javax.xml.parsers.DocumentBuilderFactory;
+import javax.xml.parsers.ParserConfigurationException;
+import javax.xml.transform.OutputKeys;
+import javax.xml.transform.Transformer;
+import javax.xml.transform.TransformerException;
+import javax.xml.transform.TransformerFactory;
+import javax.xml.transform.dom.DOMSource;
+import javax.xml.transform.stream.StreamResult;
 import org.jfree.chart.ChartUtils;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.annotations.XYDataImageAnnotation;
@@ -24,11 +37,16 @@ import org.jfree.chart.ui.RectangleEdge;
 import org.jfree.chart.ui.RectangleInsets;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
-import org.jfree.svg.SVGGraphics2D;
+import org.apache.batik.svggen.ImageHandlerBase64Encoder;
+import org.apache.batik.svggen.SVGGeneratorContext;
+import org.apache.batik.svggen.SVGGraphics2D;
+import org.apache.batik.svggen.SVGGraphics2DIOException;
+import org.w3c.dom.Document;
+import org.w3c.dom.Element;
 
 /**
  * Charts of profiles, breakthrough curves and plan views, drawn by JFreeChart off-screen and
- * written as SVG (through JFreeSVG) or PNG.
+ * written as SVG (through Batik's SVG generator) or PNG.
  */
 final class Plots {
 
@@ -48,6 +66,9 @@ final class Plots {
             return name().toLowerCase(java.util.Locale.ROOT);
         }
     }
+
+    private static final String SVG_NAMESPACE = "http://www.w3.org/2000/svg";
+    private static final String XMLNS = "http://www.w3.org/2000/xmlns/";
 
     /** Width of every plot, in pixels. */
     static final int WIDTH = 800;
@@ -187,15 +208,38 @@ final class Plots {
             ChartUtils.writeChartAsPNG(out, chart, WIDTH, HEIGHT);
             return;
         }
-        final SVGGraphics2D g2 = new SVGGraphics2D(WIDTH, HEIGHT);
-        // A fixed prefix (not the default time stamp) and coordinates to 0.01 px keep the
-        // file the same from run to run and small.
-        g2.setDefsKeyPrefix("advecta");
-        g2.setGeomDoubleConverter(v -> ParamSpec.format(Math.round(v * 100) / 100.0));
+        final Document document;
+        try {
+            document = DocumentBuilderFactory.newInstance().newDocumentBuilder()
+                .getDOMImplementation().createDocument(SVG_NAMESPACE, "svg", null);
+        } catch (ParserConfigurationException e) {
+            throw new IOException("no XML document builder: " + e.getMessage(), e);
+        }
+        final SVGGeneratorContext context = SVGGeneratorContext.createDefault(document);
+        // Coordinates to 0.01 px keep the file small; no generator comment, no time stamp:
+        // the same chart gives the same file.
+        context.setPrecision(2);
+        context.setComment(null);
+        context.setEmbeddedFontsOn(false);
+        context.setImageHandler(new PngDataUri());
+        final SVGGraphics2D g2 = new SVGGraphics2D(context, false);
+        g2.setSVGCanvasSize(new Dimension(WIDTH, HEIGHT));
         chart.draw(g2, new Rectangle2D.Double(0, 0, WIDTH, HEIGHT));
-        // The element without the SVG 1.1 DOCTYPE, whose external DTD a reader would fetch.
-        out.write(("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" + g2.getSVGElement() + "\n")
-            .getBytes(StandardCharsets.UTF_8));
+        // Written by the JDK's serializer rather than Batik's, which adds an SVG 1.0 DOCTYPE
+        // whose external DTD a validating reader would fetch.
+        final Element root = g2.getRoot();
+        root.setAttributeNS(XMLNS, "xmlns", SVG_NAMESPACE);
+        root.setAttributeNS(XMLNS, "xmlns:xlink", "http://www.w3.org/1999/xlink");
+        try {
+            final Transformer serializer = TransformerFactory.newInstance().newTransformer();
+            serializer.setOutputProperty(OutputKeys.ENCODING, "UTF-8");
+            final Writer writer = new OutputStreamWriter(out, StandardCharsets.UTF_8);
+            serializer.transform(new DOMSource(root), new StreamResult(writer));
+            writer.write('\n');
+            writer.flush();
+        } catch (TransformerException e) {
+            throw new IOException("cannot write the SVG document: " + e.getMessage(), e);
+        }
     }
 
     private static void style(XYPlot plot) {
@@ -211,6 +255,25 @@ final class Plots {
         chart.setBackgroundPaint(Color.WHITE);
         chart.setAntiAlias(true);
         return chart;
+    }
+
+    /**
+     * Embeds an image (the plan view's cells) as a base64 PNG written by ImageIO; Batik's own
+     * encoder looks for a PNG writer in a module not bundled here.
+     */
+    private static final class PngDataUri extends ImageHandlerBase64Encoder {
+        @Override
+        public void encodeImage(RenderedImage image, OutputStream out)
+                throws SVGGraphics2DIOException {
+            try {
+                if (!ImageIO.write(image, "png", out)) {
+                    throw new SVGGraphics2DIOException("no PNG writer in ImageIO");
+                }
+                out.flush();
+            } catch (IOException e) {
+                throw new SVGGraphics2DIOException(e);
+            }
+        }
     }
 
     /**

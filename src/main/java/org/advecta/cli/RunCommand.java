@@ -70,7 +70,12 @@ final class RunCommand implements Callable<Integer> {
             throw new UserError("cannot create folder " + out + ": " + Main.reason(e), e);
         }
         final Runner runner = new Runner(s, quiet ? null : io.err());
-        runner.compute();
+        try {
+            runner.compute();
+        } catch (IllegalArgumentException e) {
+            // The scenario's checks should leave nothing for the library to reject.
+            throw new UserError(scenario + ": " + e.getMessage(), e);
+        }
         final List<Path> written = runner.write(out, format);
         if (!quiet) {
             io.out().print(runner.summary());

@@ -3,7 +3,7 @@
  *
  * <p>Not exported from the module: it is an application, shipped as the runnable jar
  * (classifier {@code cli}) together with its libraries (picocli, Jackson's TOML reader,
- * Commons CSV, JFreeChart, JFreeSVG), which are optional dependencies of the library and
+ * Commons CSV, JFreeChart, Batik's SVG generator), which are optional dependencies of the library and
  * never reach its consumers.
  *
  * <p>Families are described once, in {@code Families}: a name, a summary, the domain, the
