@@ -446,7 +446,7 @@ final class Runner {
                     (inWindow - e) / e));
             }
         } else {
-            b.append(" (no closed-form total for this family)");
+            b.append(" (this family has no finite closed-form total)");
         }
         b.append('\n');
     }

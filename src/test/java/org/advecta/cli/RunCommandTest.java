@@ -238,4 +238,34 @@ class RunCommandTest {
         assertEquals("", quiet.ok());
         assertEquals(Set.of("plan.csv", "plan.svg", "summary.txt"), names(dir.resolve("b")));
     }
+
+    @Test
+    void oneDimensionalInletRunBalancesItsMass(@TempDir Path dir) throws IOException {
+        // a bromide pulse fed into a column: 100 mg/L for 6 h, v = 0.6 m/d, D = 6e-3 m²/d
+        final Path file = dir.resolve("column.toml");
+        Files.writeString(file, "title = \"column\"\nfamily = \"inlet-third\"\n"
+            + "[units]\nlength = \"m\"\ntime = \"d\"\nconcentration = \"mg/L\"\n"
+            + "[medium]\nv = 0.6\nD = 6e-3\nR = 1.2\nmu = 0.05\n"
+            + "[source]\ninput = \"pulse\"\nC0 = 100.0\nt0 = 0.25\nCi = 2.0\n"
+            + "[profiles]\ntimes = [0.1, 0.3, 0.6]\nx = { from = 0.0, to = 1.5, points = 3001 }\n"
+            + "[breakthrough]\nt = { from = 0.0, to = 1.5, points = 301 }\n"
+            + "[[breakthrough.at]]\nname = \"outlet\"\nx = 0.3\n[summary]\nlevel = 50.0\n",
+            StandardCharsets.UTF_8);
+        final Path out = dir.resolve("out");
+        final String summary = Cli.run("run", file.toString(), "--out", out.toString()).ok();
+        assertEquals(Set.of("profiles.csv", "profiles.svg", "breakthrough.csv",
+            "breakthrough.svg", "summary.txt"), names(out));
+        assertArrayEquals(new String[] {"x", "t", "c"}, rows(out.resolve("profiles.csv")).get(0));
+        final Matcher m = Pattern.compile("integral of c - background dx over the window = "
+            + "\\S+ mg/L m; exact over the whole domain = \\S+ \\(relative difference (\\S+)\\)")
+            .matcher(summary);
+        int rows = 0;
+        while (m.find()) {
+            // trapezoidal rule with h = 5e-4 m on profiles a few cm wide
+            assertTrue(Math.abs(Double.parseDouble(m.group(1))) < 1e-5, m.group());
+            rows++;
+        }
+        assertEquals(3, rows, summary);
+        assertTrue(summary.contains("outlet at (0.3) m:"), summary);
+    }
 }
