@@ -33,7 +33,7 @@ final class Families {
     /** Every family, in listing order. */
     static final List<Family> ALL = List.of(
         new Family("step", "a step of concentration C0 on one side of x0 at t = 0",
-            LINE, 1, with(transport(false),
+            LINE, 1, specs(transport(false, 1),
                 ParamSpec.number("x0", "position of the step [L]").byDefault(0),
                 ParamSpec.number("C0", "concentration on the loaded side [C]").byDefault(1),
                 ParamSpec.choice("side", "which side is loaded at t = 0", "left",
@@ -42,14 +42,14 @@ final class Families {
                 "left".equals(p.word("side")) ? InitialStep.Side.LEFT : InitialStep.Side.RIGHT),
                 null)),
         new Family("slug", "a slug of concentration C0 on a < x < b at t = 0",
-            LINE, 1, with(transport(false),
+            LINE, 1, specs(transport(false, 1),
                 ParamSpec.number("a", "left end of the slug [L]"),
                 ParamSpec.number("b", "right end of the slug, > a [L]"),
                 ParamSpec.number("C0", "concentration in the slug [C]").byDefault(1)),
             p -> line(InitialSlug.of(p.transport(), p.get("a"), p.get("b"), p.get("C0")),
                 decaying(p, p.get("C0") * (p.get("b") - p.get("a"))))),
         new Family("gaussian", "a Gaussian plume of amount M, centre xc, width s0 at t = 0",
-            LINE, 1, with(transport(false),
+            LINE, 1, specs(transport(false, 1),
                 ParamSpec.number("xc", "centre at t = 0 [L]").byDefault(0),
                 ParamSpec.number("s0", "standard deviation at t = 0 [L]").above(0),
                 ParamSpec.number("M", "amount: the integral of c(x, 0) over x [C L]")
@@ -57,27 +57,27 @@ final class Families {
             p -> line(InitialGaussian.of(p.transport(), p.get("xc"), p.get("s0"), p.get("M")),
                 decaying(p, p.get("M")))),
         new Family("background", "a uniform level Cb that decays with the medium",
-            LINE, 1, with(transport(false),
+            LINE, 1, specs(transport(false, 1),
                 ParamSpec.number("Cb", "level at t = 0 [C]").byDefault(1)),
             p -> line(DecayingBackground.of(p.transport(), p.get("Cb")), null)),
         new Family("inlet-first",
             "inlet x = 0 held at concentration g(t) (first-type); initial level Ci",
-            HALF_LINE, 1, with(transport(false), inletSpecs()),
+            HALF_LINE, 1, specs(transport(false, 1), inletSpecs()),
             p -> line(FirstTypeInlet.of(p.transport(), input(p))
                 .withInitialConcentration(p.get("Ci")), null)),
         new Family("inlet-third",
             "water entering at x = 0 with concentration g(t) (flux, third-type); initial level Ci",
-            HALF_LINE, 1, with(transport(true), inletSpecs()),
+            HALF_LINE, 1, specs(transport(true, 1), inletSpecs()),
             p -> line(ThirdTypeInlet.of(p.transport(), input(p))
                 .withInitialConcentration(p.get("Ci")), new InletBudget(p))),
         new Family("release-1d", "instantaneous release of amount M at x0 at t = 0",
-            LINE, 1, with(transport(false),
+            LINE, 1, specs(transport(false, 1),
                 ParamSpec.number("x0", "release point [L]").byDefault(0),
                 ParamSpec.number("M", "amount released per unit cross-section and mobile-phase "
                     + "capacity, e.g. mass/(porosity x area) [C L]").byDefault(1)),
             Families::release1d),
         new Family("release-2d", "instantaneous release of amount M at (x0, y0), flow along x",
-            "plane", 2, with(transport(false), dispersion(2),
+            "plane", 2, specs(transport(false, 2),
                 ParamSpec.number("x0", "release point along the flow [L]").byDefault(0),
                 ParamSpec.number("y0", "release point across the flow [L]").byDefault(0),
                 ParamSpec.number("M", "amount released per unit thickness and mobile-phase "
@@ -85,7 +85,7 @@ final class Families {
             Families::release2d),
         new Family("release-3d",
             "instantaneous release of amount M at (x0, y0, z0), flow along x",
-            "space", 3, with(transport(false), dispersion(3),
+            "space", 3, specs(transport(false, 3),
                 ParamSpec.number("x0", "release point along the flow [L]").byDefault(0),
                 ParamSpec.number("y0", "release point across the flow [L]").byDefault(0),
                 ParamSpec.number("z0", "release point in the third direction [L]").byDefault(0),
@@ -113,26 +113,29 @@ final class Families {
             + String.join(", ", ALL.stream().map(Family::name).toArray(String[]::new)) + ")");
     }
 
-    private static List<ParamSpec> transport(boolean positiveVelocity) {
+    /** v, D, R, mu, and D_T (2D, 3D) and D_V (3D). */
+    private static List<ParamSpec> transport(boolean positiveVelocity, int dimensions) {
         final ParamSpec v = ParamSpec.number("v", positiveVelocity
             ? "velocity along x, into the domain [L/T]" : "velocity along x [L/T]");
-        return List.of(
+        final List<ParamSpec> specs = new ArrayList<>(List.of(
             positiveVelocity ? v.above(0) : v,
             ParamSpec.number("D", "dispersion coefficient along the flow [L^2/T]").above(0),
             ParamSpec.number("R", "retardation factor [-]").byDefault(1).atLeast(1),
             ParamSpec.number("mu", "first-order decay rate of the dissolved phase [1/T]")
-                .byDefault(0).atLeast(0));
+                .byDefault(0).atLeast(0)));
+        if (dimensions >= 2) {
+            specs.add(ParamSpec.number("DT",
+                "transverse dispersion coefficient, along y [L^2/T]").above(0));
+        }
+        if (dimensions >= 3) {
+            specs.add(ParamSpec.number("DV",
+                "transverse dispersion coefficient, along z [L^2/T]").above(0));
+        }
+        return specs;
     }
 
-    private static List<ParamSpec> dispersion(int dimensions) {
-        final ParamSpec dt = ParamSpec.number("DT",
-            "transverse dispersion coefficient, along y [L^2/T]").above(0);
-        return dimensions == 2 ? List.of(dt) : List.of(dt, ParamSpec.number("DV",
-            "transverse dispersion coefficient, along z [L^2/T]").above(0));
-    }
-
-    private static List<ParamSpec> inletSpecs() {
-        return List.of(
+    private static ParamSpec[] inletSpecs() {
+        return new ParamSpec[] {
             ParamSpec.choice("input", "inlet history g(t): C0 constant, C0 for t <= t0 "
                 + "(pulse), or C0 exp(-lambda t)", "constant", "constant", "pulse",
                 "exponential"),
@@ -141,20 +144,13 @@ final class Families {
                 .optional(),
             ParamSpec.number("lambda", "rate of the exponential input (input = exponential "
                 + "only; < 0 grows) [1/T]").optional(),
-            ParamSpec.number("Ci", "initial concentration in the domain [C]").byDefault(0));
+            ParamSpec.number("Ci", "initial concentration in the domain [C]").byDefault(0)};
     }
 
-    private static List<ParamSpec> with(List<ParamSpec> first, Object... rest) {
-        final List<ParamSpec> all = new ArrayList<>(first);
-        for (Object o : rest) {
-            if (o instanceof ParamSpec) {
-                all.add((ParamSpec) o);
-            } else {
-                for (Object p : (List<?>) o) {
-                    all.add((ParamSpec) p);
-                }
-            }
-        }
+    /** The common specs followed by the family's own. */
+    private static List<ParamSpec> specs(List<ParamSpec> common, ParamSpec... own) {
+        final List<ParamSpec> all = new ArrayList<>(common);
+        all.addAll(List.of(own));
         return all;
     }
 

@@ -289,7 +289,7 @@ final class Runner {
             }
             b.append(String.format(Locale.ROOT, "  %s at %s %s:%n", q.name,
                 where(q.x, q.y, q.z), s.length));
-            final double[] peak = peak(q, bt.t, best);
+            final double[] peak = peak(q, bt.t, best, c[best]);
             String note = "";
             if (best == 0) {
                 note = " (at the start of the window)";
@@ -307,8 +307,7 @@ final class Runner {
     }
 
     /** The peak (t, c) near sample i, refined by golden-section search between neighbours. */
-    private double[] peak(Scenario.Probe q, Grid t, int i) {
-        final double sampled = curves[s.breakthrough.at.indexOf(q)][i];
+    private double[] peak(Scenario.Probe q, Grid t, int i, double sampled) {
         if (i == 0 || i == t.points() - 1) {
             return new double[] {t.at(i), sampled};
         }
@@ -464,7 +463,13 @@ final class Runner {
         return sum + comp;
     }
 
-    /** A number for people: six significant digits, no trailing zeros. */
+    /**
+     * Formats a number for people: six significant digits, no trailing zeros, plain notation
+     * from 1e-4 to 1e7 and scientific notation outside.
+     *
+     * @param v the number
+     * @return the text
+     */
     static String num(double v) {
         if (v == 0 || !Double.isFinite(v)) {
             return v == 0 ? "0" : Double.toString(v);

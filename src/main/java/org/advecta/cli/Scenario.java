@@ -44,11 +44,23 @@ final class Scenario {
 
     /** Profiles along x at fixed times (and fixed y, z for 2D and 3D families). */
     static final class Profiles {
+        /** The times, each &gt; 0 (not copied: the scenario owns the array). */
         final double[] times;
+        /** The positions along x. */
         final Grid x;
+        /** The fixed y (2D, 3D; 0 otherwise). */
         final double y;
+        /** The fixed z (3D; 0 otherwise). */
         final double z;
 
+        /**
+         * Bundles a validated profiles section.
+         *
+         * @param times the times
+         * @param x the positions along x
+         * @param y the fixed y
+         * @param z the fixed z
+         */
         Profiles(double[] times, Grid x, double y, double z) {
             this.times = times;
             this.x = x;
@@ -59,11 +71,23 @@ final class Scenario {
 
     /** A named observation point. */
     static final class Probe {
+        /** The name in tables, plots and the summary. */
         final String name;
+        /** Position along the flow. */
         final double x;
+        /** Position across the flow (2D, 3D; 0 otherwise). */
         final double y;
+        /** Position in the third direction (3D; 0 otherwise). */
         final double z;
 
+        /**
+         * Creates a validated point.
+         *
+         * @param name the name
+         * @param x position along the flow
+         * @param y position across the flow
+         * @param z position in the third direction
+         */
         Probe(String name, double x, double y, double z) {
             this.name = name;
             this.x = x;
@@ -74,9 +98,17 @@ final class Scenario {
 
     /** Breakthrough curves: c against t at observation points. */
     static final class Breakthrough {
+        /** The times, from ≥ 0. */
         final Grid t;
+        /** The points, at least one. */
         final List<Probe> at;
 
+        /**
+         * Bundles a validated breakthrough section.
+         *
+         * @param t the times
+         * @param at the points
+         */
         Breakthrough(Grid t, List<Probe> at) {
             this.t = t;
             this.at = Collections.unmodifiableList(at);
@@ -85,11 +117,23 @@ final class Scenario {
 
     /** A plan view: c over an x–y grid at one time (and fixed z for 3D families). */
     static final class Plan {
+        /** The time, &gt; 0. */
         final double time;
+        /** The grid along x. */
         final Grid x;
+        /** The grid along y. */
         final Grid y;
+        /** The fixed z (3D; 0 otherwise). */
         final double z;
 
+        /**
+         * Bundles a validated plan section.
+         *
+         * @param time the time
+         * @param x the grid along x
+         * @param y the grid along y
+         * @param z the fixed z
+         */
         Plan(double time, Grid x, Grid y, double z) {
             this.time = time;
             this.x = x;
@@ -98,15 +142,25 @@ final class Scenario {
         }
     }
 
+    /** The title for plots and the summary (the file's name without .toml by default). */
     final String title;
+    /** The family. */
     final Family family;
+    /** Its validated parameters, from [medium] and [source]. */
     final Params params;
+    /** The field to evaluate. */
     final Field field;
+    /** The label of the length unit. */
     final String length;
+    /** The label of the time unit. */
     final String time;
+    /** The label of the concentration unit. */
     final String concentration;
+    /** The profiles to compute, or null. */
     final Profiles profiles;
+    /** The breakthrough curves to compute, or null. */
     final Breakthrough breakthrough;
+    /** The plan view to compute, or null. */
     final Plan plan;
     /** The level whose arrival the summary reports, or null. */
     final Double level;
