@@ -112,6 +112,15 @@ class BadInputTest {
     }
 
     @Test
+    void outputFolderThatIsAFile(@TempDir Path dir) throws IOException {
+        final Path file = dir.resolve("taken");
+        Files.writeString(file, "x", StandardCharsets.UTF_8);
+        Cli.run("run", "scenarios/road-salt-spill.toml", "--out", file.toString())
+            .userError("cannot create folder", "taken", "a file of that name is in the way");
+        assertEquals("x", Files.readString(file, StandardCharsets.UTF_8));
+    }
+
+    @Test
     void aFailedEvalLeavesNoOutputFileAndKeepsAnOldOne(@TempDir Path dir) throws IOException {
         final StringBuilder csv = new StringBuilder("x,t\n");
         for (int i = 0; i < 5000; i++) {
