@@ -3,6 +3,10 @@ package org.advecta.fit;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import org.advecta.moments.Moments;
 import org.advecta.solution.InitialStep;
 import org.advecta.solution.InletInput;
@@ -15,13 +19,13 @@ import org.advecta.verify.TimeShiftedSolution;
 import org.junit.jupiter.api.Test;
 
 /**
- * The usage example proposed for README's section on verification, fitting and moments: kept
- * compiling and running here (the README check itself belongs with README).
+ * README's usage example of verification, fitting and moments: kept compiling, running and
+ * in sync with README (every code line of the block below must appear there).
  */
-class ProposedReadmeExampleTest {
+class ReadmeToolsExampleTest {
 
     @Test
-    void proposedExampleRuns() {
+    void readmeToolsExampleRuns() throws IOException {
         final double[] times = new double[100];
         final double[] measured = new double[100];
         final Solution1D column = ThirdTypeInletData.truth();
@@ -29,7 +33,7 @@ class ProposedReadmeExampleTest {
             times[i] = 0.05 * (i + 1);
             measured[i] = column.fluxAveraged(1.0, times[i]);
         }
-        // --- the proposed README example, verbatim ---
+        // --- README's example, verbatim ---
         Solution1D exact = TimeShiftedSolution.of(InitialStep.of(TransportParameters.of(1.0, 0.01),
             0.25, 1.0, InitialStep.Side.LEFT), 0.2);         // a step, smooth from t0 = 0.2 on
         double[] faces = {0.0, 0.1, 0.2, 0.3}, cells = new double[3];
@@ -51,6 +55,22 @@ class ProposedReadmeExampleTest {
         assertEquals(0.6, v, 1e-8);
         assertTrue(low <= v && v - low < 1e-10); // noise-free data: a very narrow interval
         assertEquals(1.0 / 0.6 + 0.25, m.mean(), 0.01);
+        final String readme = Files.readString(Path.of("README.md"), StandardCharsets.UTF_8);
+        final String source = Files.readString(
+            Path.of("src/test/java/org/advecta/fit/ReadmeToolsExampleTest.java"),
+            StandardCharsets.UTF_8);
+        final String block = source.substring(source.indexOf("// --- README's example"),
+            source.indexOf("// --- end of the example"));
+        int checked = 0;
+        for (String line : block.split("\n")) {
+            final String code = line.trim();
+            if (code.isEmpty() || code.startsWith("//")) {
+                continue;
+            }
+            checked++;
+            assertTrue(readme.contains(code), "README no longer shows: " + code);
+        }
+        assertTrue(checked >= 12, "only " + checked + " lines checked");
     }
 
     /** The column behind the example's data. */
