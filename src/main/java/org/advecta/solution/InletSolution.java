@@ -128,9 +128,10 @@ abstract class InletSolution extends AbstractSolution1D {
      * R(t) − R(t − t₀), the response to a rectangular pulse (superposition in time), chosen
      * among three cancellation-free forms: quadrature of the impulse response over
      * [t − t₀, t] when that is narrow; the direct difference while R(t) is below half its
-     * steady state (the front has not passed: R(t − t₀) ≪ R(t)); the difference of the
-     * complements R(∞) − R once the front has passed (where it loses at most one bit, it is
-     * taken even over a narrow interval: cheaper than the quadrature).
+     * steady state (the front has not passed: R(t − t₀) ≪ R(t)) or while R(t − t₀) ≤ R(t)/2;
+     * the difference of the complements R(∞) − R once the front has passed (where it loses
+     * at most one bit, it is taken even over a narrow interval: cheaper than the
+     * quadrature).
      */
     private double pulse(double x, double t) {
         final double t0 = input.duration();
@@ -154,6 +155,12 @@ abstract class InletSolution extends AbstractSolution1D {
         final double now = response.value(x, t, 0.0);
         if (now <= 0.5 * response.steady(x)) {
             return now - response.value(x, t1, 0.0);
+        }
+        // near the steady state: still the plain difference while it loses at most one bit
+        // (the end of the pulse has not arrived yet), else the complements
+        final double before = response.value(x, t1, 0.0);
+        if (before <= 0.5 * now) {
+            return now - before;
         }
         return response.complement(x, t1) - response.complement(x, t);
     }
