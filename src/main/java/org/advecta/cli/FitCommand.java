@@ -49,14 +49,14 @@ import picocli.CommandLine.Parameters;
             + "a value start from the data's moments).",
         "Writes into the output folder: fit.csv (the data with columns fitted and residual), "
             + "fit.svg or fit.png (data against the fitted curves) and fit.txt (estimates, "
-            + "standard errors, 95 % intervals, correlations, R^2, status)."},
+            + "standard errors, 95 %% intervals, correlations, R^2, status)."},
     footer = {"", "Exit status: 0 a converged fit; 3 a fit that failed (not converged, not "
         + "identifiable, on a bound, model failed): the status and its reason are printed "
         + "and written to fit.txt; 2 a mistake in the command or the data (one line on "
         + "standard error, no files written).",
         "", "Example:",
-        "  advecta fit column.csv inlet-third input=pulse t0=0.5 C0=1 --free v,D "
-            + "--observe flux-averaged -o fitted"})
+        "  advecta fit column.csv inlet-third input=pulse t0=0.5 --free v,D \\",
+        "      --observe flux-averaged -o fitted"})
 final class FitCommand implements Callable<Integer> {
 
     /** The 1-D families a fit supports, with the key of their source strength. */
@@ -614,7 +614,12 @@ final class FitCommand implements Callable<Integer> {
         return b.toString();
     }
 
-    /** Appends rows as left-aligned columns separated by two spaces. */
+    /**
+     * Appends rows as left-aligned columns separated by two spaces (trailing spaces removed).
+     *
+     * @param b receives the lines
+     * @param rows the rows, each with as many cells as the first
+     */
     static void table(StringBuilder b, List<String[]> rows) {
         final int columns = rows.get(0).length;
         final int[] width = new int[columns];

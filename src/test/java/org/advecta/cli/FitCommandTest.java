@@ -17,6 +17,13 @@ import java.util.Random;
 import javax.imageio.ImageIO;
 import javax.xml.XMLConstants;
 import javax.xml.parsers.DocumentBuilderFactory;
+import org.advecta.fit.FitResult;
+import org.advecta.fit.ModelFamily;
+import org.advecta.fit.Observable;
+import org.advecta.fit.Observations;
+import org.advecta.fit.Parameter;
+import org.advecta.fit.ParameterFit;
+import org.advecta.fit.TransportModel;
 import org.advecta.solution.FirstTypeInlet;
 import org.advecta.solution.InitialGaussian;
 import org.advecta.solution.InletInput;
@@ -195,6 +202,30 @@ class FitCommandTest {
             assertTrue(r[1] > 0 && r[0] != e.getValue());
         }
         assertTrue(stdout.contains("2 breakthrough curves at x = 0.5, 1"), stdout);
+        // The printed numbers are the library's own, bit for bit: the same fit through the API.
+        final double[][] t = new double[2][40];
+        final double[][] c = new double[2][40];
+        for (int k = 0; k < 80; k++) {
+            final String[] f = rows.get(k).split(",");
+            t[k / 40][k % 40] = Double.parseDouble(f[2]);
+            c[k / 40][k % 40] = Double.parseDouble(f[3]);
+        }
+        final FitResult api = ParameterFit.fit(TransportModel.of(ModelFamily.firstTypeInlet(
+                InletInput.constant(1)), Observable.RESIDENT)
+            .withFree(Parameter.VELOCITY, Parameter.DISPERSION)
+            .withValue(Parameter.RETARDATION, 1).withValue(Parameter.DECAY, 0)
+            .withValue(Parameter.SOURCE, 2),
+            Observations.breakthrough(0.5, t[0], c[0]).and(
+                Observations.breakthrough(1.0, t[1], c[1])));
+        for (Parameter p : new Parameter[] {Parameter.VELOCITY, Parameter.DISPERSION}) {
+            final double[] r = est.get(p.symbol());
+            final double[] expected = {api.value(p), api.standardError(p), api.lower95(p),
+                api.upper95(p)};
+            for (int j = 0; j < 4; j++) {
+                assertEquals(Double.doubleToLongBits(expected[j]), Double.doubleToLongBits(r[j]),
+                    p.symbol() + " column " + j);
+            }
+        }
         // extra columns pass through to fit.csv
         final List<String[]> table = rows(out.resolve("fit.csv"));
         assertEquals("well", table.get(0)[0]);
