@@ -241,6 +241,37 @@ class CheckCommandTest {
     }
 
     @Test
+    void cellRefinementLevelsGiveTheirKnownOrderWithInferredWidths(@TempDir Path dir)
+            throws IOException {
+        final Solution1D step = InitialStep.of(TransportParameters.of(1.0, 0.01), 0.25, 1.0,
+            InitialStep.Side.LEFT);
+        final List<String> args = new ArrayList<>(List.of("check"));
+        for (int cells : new int[] {10, 20, 40}) {
+            final double h = 1.0 / cells;
+            final List<String> rows = new ArrayList<>();
+            for (int i = 0; i < cells; i++) {
+                final double a = i * h;
+                final double b = (i + 1) * h;
+                // error +-h on alternate cells: every norm is h (width weights sum to 1)
+                rows.add(a + "," + b + ",0.3," + (CellAverages.average(step, a, b, 0.3)
+                    + (i % 2 == 0 ? h : -h)));
+            }
+            final Path file = dir.resolve("cells" + cells + ".csv");
+            FitCommandTest.writeCsv(file, "x_left,x_right,t,c", rows);
+            args.add(file.toString());
+        }
+        args.addAll(List.of("step", "v=1", "D=0.01", "x0=0.25", "--cells"));
+        final String out = Cli.run(args.toArray(new String[0])).ok();
+        assertTrue(out.contains("cell averages, weights the cell widths"), out);
+        for (String norm : new String[] {"L1", "L2", "Linf"}) {
+            final double[] r = orderRow(out, norm);
+            for (int i = 0; i < 3; i++) {
+                assertEquals(1.0, r[i], 1e-9, norm + ": " + out);
+            }
+        }
+    }
+
+    @Test
     void gridConvergenceIndexOfThreeLevels(@TempDir Path dir) throws IOException {
         // A uniform exact field (background, no decay) and c = 1 + h^2: phi = mean c = 1 + h^2,
         // so the apparent order is 2 and the extrapolated phi is the exact 1.

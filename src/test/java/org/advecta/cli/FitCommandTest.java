@@ -14,6 +14,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
+import java.util.stream.Stream;
 import javax.imageio.ImageIO;
 import javax.xml.XMLConstants;
 import javax.xml.parsers.DocumentBuilderFactory;
@@ -26,6 +27,8 @@ import org.advecta.fit.ParameterFit;
 import org.advecta.fit.TransportModel;
 import org.advecta.solution.FirstTypeInlet;
 import org.advecta.solution.InitialGaussian;
+import org.advecta.solution.InitialSlug;
+import org.advecta.solution.InitialStep;
 import org.advecta.solution.InletInput;
 import org.advecta.solution.Solution1D;
 import org.advecta.solution.ThirdTypeInlet;
@@ -170,6 +173,50 @@ class FitCommandTest {
         final BufferedImage png = ImageIO.read(out.resolve("fit.png").toFile());
         assertEquals(Plots.WIDTH, png.getWidth());
         assertEquals(Plots.HEIGHT, png.getHeight());
+    }
+
+    /** One more family each: the command maps its keys to the library's model. */
+    @Test
+    void stepSlugAndExponentialInletMapToTheLibrarysModels(@TempDir Path dir) throws Exception {
+        final Solution1D step = InitialStep.of(TransportParameters.of(0.5, 0.02), 0.3, 1.0,
+            InitialStep.Side.RIGHT);
+        final Solution1D slug = InitialSlug.of(TransportParameters.of(0.5, 0.02)
+            .withRetardation(2), 0.0, 0.2, 3.0);
+        final Solution1D inlet = FirstTypeInlet.of(TransportParameters.of(1.0, 0.05)
+            .withDecay(0.1), InletInput.exponential(1.0, 0.3));
+        final List<String> stepRows = new ArrayList<>();
+        final List<String> slugRows = new ArrayList<>();
+        final List<String> inletRows = new ArrayList<>();
+        for (int i = 0; i <= 60; i++) {
+            final double x = -0.5 + 2.0 * i / 60;
+            stepRows.add(x + ",0.4," + step.value(x, 0.4));
+            slugRows.add(x + ",1.0," + slug.value(x, 1.0));
+            final double t = 0.05 + 0.05 * i;
+            inletRows.add("1.0," + t + "," + inlet.value(1.0, t));
+        }
+        final Object[][] cases = {
+            {stepRows, new String[] {"step", "x0=0.3", "side=right"}, 0.5, 0.02},
+            {slugRows, new String[] {"slug", "a=0", "b=0.2", "R=2", "--free", "v,D,C0"}, 0.5,
+                0.02},
+            {inletRows, new String[] {"inlet-first", "input=exponential", "lambda=0.3",
+                "mu=0.1"}, 1.0, 0.05}};
+        int k = 0;
+        for (Object[] c : cases) {
+            @SuppressWarnings("unchecked")
+            final List<String> rows = (List<String>) c[0];
+            final Path data = dir.resolve("case" + k + ".csv");
+            writeCsv(data, "x,t,c", rows);
+            final String[] args = Stream.concat(Stream.of("fit", data.toString()),
+                Stream.concat(Stream.of((String[]) c[1]), Stream.of("-o",
+                    dir.resolve("out" + k++).toString()))).toArray(String[]::new);
+            final String stdout = Cli.run(args).ok();
+            final Map<String, double[]> est = estimates(stdout);
+            assertEquals((double) c[2], est.get("v")[0], 1e-6 * (double) c[2], stdout);
+            assertEquals((double) c[3], est.get("D")[0], 1e-6 * (double) c[3], stdout);
+            if (est.containsKey("C0")) {
+                assertEquals(3.0, est.get("C0")[0], 3e-6, stdout);
+            }
+        }
     }
 
     @Test
