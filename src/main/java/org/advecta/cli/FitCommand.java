@@ -17,7 +17,6 @@ import java.util.Map;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import org.advecta.fit.FitResult;
-import org.advecta.fit.FitStatus;
 import org.advecta.fit.ModelFamily;
 import org.advecta.fit.Observable;
 import org.advecta.fit.Observations;

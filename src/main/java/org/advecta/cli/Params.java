@@ -3,6 +3,7 @@ package org.advecta.cli;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.Set;
 import org.advecta.transport.TransportParameters;
 
 /**
@@ -32,7 +33,7 @@ final class Params {
      *     range or a missing required parameter
      */
     static Params of(Family family, Map<String, Object> raw) {
-        return of(family, raw, java.util.Set.of());
+        return of(family, raw, Set.of());
     }
 
     /**
@@ -47,7 +48,7 @@ final class Params {
      * @throws UserError on an unknown key, a missing or malformed value, a value out of
      *     range or a missing required parameter not in mayBeMissing
      */
-    static Params of(Family family, Map<String, Object> raw, java.util.Set<String> mayBeMissing) {
+    static Params of(Family family, Map<String, Object> raw, Set<String> mayBeMissing) {
         final Map<String, Double> numbers = new LinkedHashMap<>();
         final Map<String, String> words = new LinkedHashMap<>();
         for (Map.Entry<String, Object> e : raw.entrySet()) {
