@@ -263,7 +263,17 @@ final class EvalCommand implements Callable<Integer> {
         return column;
     }
 
-    private static double cell(String source, long line, String name, String text) {
+    /**
+     * Parses one numeric cell of a table.
+     *
+     * @param source the table's name for messages
+     * @param line the cell's line number
+     * @param name the column's name
+     * @param text the cell
+     * @return the number (possibly infinite for a literal such as 1e999)
+     * @throws UserError naming the line and column if the cell is empty or not a number
+     */
+    static double cell(String source, long line, String name, String text) {
         final String s = text.strip();
         if (s.isEmpty()) {
             throw new UserError(source + ": line " + line + ": column " + name

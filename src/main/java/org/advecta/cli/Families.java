@@ -2,6 +2,7 @@ package org.advecta.cli;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import org.advecta.kernel.FreeSpaceKernel1D;
 import org.advecta.kernel.FreeSpaceKernel2D;
@@ -154,7 +155,14 @@ final class Families {
         return all;
     }
 
-    private static InletInput input(Params p) {
+    /**
+     * Returns the inlet history an inlet family's parameters describe.
+     *
+     * @param p parameters of inlet-first or inlet-third
+     * @return the input, with level C0
+     * @throws UserError if t0 or lambda is missing for, or given without, its input kind
+     */
+    static InletInput input(Params p) {
         final String kind = p.word("input");
         requireOnlyWith(p, "t0", "pulse", kind);
         requireOnlyWith(p, "lambda", "exponential", kind);
@@ -300,6 +308,11 @@ final class Families {
         @Override
         public double background(double t) {
             return budget == null ? 0.0 : budget.background(t);
+        }
+
+        @Override
+        public Optional<Solution1D> line() {
+            return Optional.of(solution);
         }
 
         @Override

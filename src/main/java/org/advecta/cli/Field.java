@@ -1,6 +1,8 @@
 package org.advecta.cli;
 
+import java.util.Optional;
 import java.util.OptionalDouble;
+import org.advecta.solution.Solution1D;
 
 /**
  * A concentration field in one, two or three dimensions, as the command line evaluates it:
@@ -81,5 +83,15 @@ interface Field {
      */
     default OptionalDouble mass(double t) {
         return OptionalDouble.empty();
+    }
+
+    /**
+     * Returns the library's one-dimensional solution behind this field, for what needs a
+     * {@link Solution1D} (exact cell averages), when there is one.
+     *
+     * @return the solution, or empty (kernels, 2D and 3D fields)
+     */
+    default Optional<Solution1D> line() {
+        return Optional.empty();
     }
 }

@@ -15,15 +15,19 @@ import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Spec;
 
 /**
- * The command line: {@code advecta list}, {@code advecta eval}, {@code advecta run}.
+ * The command line: {@code advecta list}, {@code advecta eval}, {@code advecta run},
+ * {@code advecta fit}, {@code advecta check}.
  *
  * <p>Exit status: 0 on success, 2 for a mistake in the command line or the input (one line on
- * standard error naming it, no stack trace), 1 for an internal failure.
+ * standard error naming it, no stack trace), 3 for a fit that did not converge (its report is
+ * still written), 1 for an internal failure.
  */
 public final class Main {
 
     /** Exit status for a mistake in what the user gave. */
     static final int USER_ERROR = 2;
+    /** Exit status of {@code fit} when the fit failed (its status and report are written). */
+    static final int FIT_FAILED = 3;
     /** Exit status for a failure of the program itself. */
     static final int INTERNAL_ERROR = 1;
 
@@ -79,7 +83,8 @@ public final class Main {
         version = "advecta 0.1.0-SNAPSHOT",
         description = "Exact solutions of R dc/dt = D d2c/dx2 - v dc/dx - mu c.",
         footer = {"", "Exit status: 0 success, 2 a mistake in the command or its input "
-            + "(one line on standard error), 1 an internal failure."})
+            + "(one line on standard error), 3 a fit that failed (fit only), 1 an internal "
+            + "failure."})
     static final class Top implements Runnable {
         @Spec
         private CommandSpec spec;
@@ -87,7 +92,7 @@ public final class Main {
         @Override
         public void run() {
             throw new CommandLine.ParameterException(spec.commandLine(),
-                "missing subcommand (list, eval or run)");
+                "missing subcommand (list, eval, run, fit or check)");
         }
     }
 
@@ -117,6 +122,8 @@ public final class Main {
         cl.addSubcommand("list", new ListCommand(io));
         cl.addSubcommand("eval", new EvalCommand(io));
         cl.addSubcommand("run", new RunCommand(io));
+        cl.addSubcommand("fit", new FitCommand(io));
+        cl.addSubcommand("check", new CheckCommand(io));
         cl.setOut(new PrintWriter(io.out(), true, StandardCharsets.UTF_8));
         cl.setErr(new PrintWriter(io.err(), true, StandardCharsets.UTF_8));
         cl.setParameterExceptionHandler((ex, arguments) -> {

@@ -3,6 +3,7 @@ package org.advecta.cli;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.Set;
 import org.advecta.transport.TransportParameters;
 
 /**
@@ -32,6 +33,22 @@ final class Params {
      *     range or a missing required parameter
      */
     static Params of(Family family, Map<String, Object> raw) {
+        return of(family, raw, Set.of());
+    }
+
+    /**
+     * Validates raw values against a family's specs, as {@link #of(Family, Map)}, except that
+     * the given keys may be missing even where the family requires them (a fit's free
+     * parameters: {@link #has(String)} then tells whether a starting value was given).
+     *
+     * @param family the family
+     * @param raw key to value, in the order given
+     * @param mayBeMissing keys that need no value
+     * @return the validated parameters
+     * @throws UserError on an unknown key, a missing or malformed value, a value out of
+     *     range or a missing required parameter not in mayBeMissing
+     */
+    static Params of(Family family, Map<String, Object> raw, Set<String> mayBeMissing) {
         final Map<String, Double> numbers = new LinkedHashMap<>();
         final Map<String, String> words = new LinkedHashMap<>();
         for (Map.Entry<String, Object> e : raw.entrySet()) {
@@ -55,7 +72,7 @@ final class Params {
             if (numbers.containsKey(spec.key()) || words.containsKey(spec.key())) {
                 continue;
             }
-            if (spec.isRequired()) {
+            if (spec.isRequired() && !mayBeMissing.contains(spec.key())) {
                 throw new UserError("family " + family.name() + " needs parameter "
                     + spec.key() + " (" + spec.meaning() + ")");
             }

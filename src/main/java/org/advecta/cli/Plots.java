@@ -65,6 +65,24 @@ final class Plots {
         String extension() {
             return name().toLowerCase(java.util.Locale.ROOT);
         }
+
+        /**
+         * Reads the value of the {@code --plots} option.
+         *
+         * @param text "svg" or "png", any case
+         * @return the format
+         * @throws UserError for any other word
+         */
+        static Format parse(String text) {
+            switch (text.strip().toLowerCase(java.util.Locale.ROOT)) {
+                case "svg":
+                    return SVG;
+                case "png":
+                    return PNG;
+                default:
+                    throw new UserError("--plots " + text + ": must be svg or png");
+            }
+        }
     }
 
     private static final String SVG_NAMESPACE = "http://www.w3.org/2000/svg";
@@ -130,6 +148,61 @@ final class Plots {
             marker.setLabelTextAnchor(org.jfree.chart.ui.TextAnchor.BOTTOM_RIGHT);
             plot.addRangeMarker(marker);
         }
+        return chart(title, plot, true);
+    }
+
+    /**
+     * Builds a chart of measured points against fitted curves: for each curve its data as
+     * markers and the fitted model as a line, in the same colour.
+     *
+     * @param title the title
+     * @param xLabel the horizontal axis label
+     * @param yLabel the vertical axis label
+     * @param names one name per curve
+     * @param dataX the data's abscissae, one array per curve
+     * @param dataY the data's ordinates, as many
+     * @param lineX the fitted line's abscissae, one array per curve (empty for no line)
+     * @param lineY the fitted line's ordinates, as many; non-finite values are left out
+     * @return the chart
+     */
+    static JFreeChart fit(String title, String xLabel, String yLabel, List<String> names,
+                          List<double[]> dataX, List<double[]> dataY, List<double[]> lineX,
+                          List<double[]> lineY) {
+        final XYSeriesCollection lines = new XYSeriesCollection();
+        final XYSeriesCollection points = new XYSeriesCollection();
+        for (int s = 0; s < names.size(); s++) {
+            final XYSeries line = new XYSeries("fit, " + names.get(s), false, true);
+            for (int i = 0; i < lineX.get(s).length; i++) {
+                if (Double.isFinite(lineY.get(s)[i])) {
+                    line.add(lineX.get(s)[i], lineY.get(s)[i]);
+                }
+            }
+            lines.addSeries(line);
+            final XYSeries data = new XYSeries("data, " + names.get(s), false, true);
+            for (int i = 0; i < dataX.get(s).length; i++) {
+                data.add(dataX.get(s)[i], dataY.get(s)[i]);
+            }
+            points.addSeries(data);
+        }
+        final NumberAxis xAxis = new NumberAxis(xLabel);
+        xAxis.setAutoRangeIncludesZero(false);
+        final NumberAxis yAxis = new NumberAxis(yLabel);
+        final XYLineAndShapeRenderer lineRenderer = new XYLineAndShapeRenderer(true, false);
+        lineRenderer.setDrawSeriesLineAsPath(true);
+        final XYLineAndShapeRenderer pointRenderer = new XYLineAndShapeRenderer(false, true);
+        final java.awt.Shape marker = new java.awt.geom.Ellipse2D.Double(-3, -3, 6, 6);
+        for (int s = 0; s < names.size(); s++) {
+            final Color colour = COLOURS[s % COLOURS.length];
+            lineRenderer.setSeriesPaint(s, colour);
+            lineRenderer.setSeriesStroke(s, new BasicStroke(2f));
+            pointRenderer.setSeriesPaint(s, colour);
+            pointRenderer.setSeriesShape(s, marker);
+            pointRenderer.setSeriesShapesFilled(s, false);
+        }
+        final XYPlot plot = new XYPlot(points, xAxis, yAxis, pointRenderer);
+        plot.setDataset(1, lines);
+        plot.setRenderer(1, lineRenderer);
+        style(plot);
         return chart(title, plot, true);
     }
 

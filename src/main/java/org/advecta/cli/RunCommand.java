@@ -52,17 +52,7 @@ final class RunCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        final Plots.Format format;
-        switch (plots.strip().toLowerCase(java.util.Locale.ROOT)) {
-            case "svg":
-                format = Plots.Format.SVG;
-                break;
-            case "png":
-                format = Plots.Format.PNG;
-                break;
-            default:
-                throw new UserError("--plots " + plots + ": must be svg or png");
-        }
+        final Plots.Format format = Plots.Format.parse(plots);
         final Scenario s = Scenario.read(scenario);
         try {
             Files.createDirectories(out);
