@@ -110,7 +110,8 @@ final class GridConvolution {
                 final double fftCost = FFT_COST * padded * (63 - Long.numberOfLeadingZeros(padded));
                 useFft = padded <= MAX_FFT && fftCost < windowCost;
         }
-        double bound = (CUT_MASS + (WEIGHT_ERROR + 8) * U) * maxAbs * decay;
+        double bound = (CUT_MASS + (WEIGHT_ERROR + 8) * U) * maxAbs * decay
+            + positionError(s, p, outOrigin, nOut);
         if (useFft) {
             bound += fft(f, hat, hLo, out, (int) padded, maxAbs);
         } else {
@@ -135,6 +136,29 @@ final class GridConvolution {
             out[i] = c;
         }
         return bound;
+    }
+
+    /**
+     * The effect of rounding the scaled distances: s + (d − ½)Δ is rounded once (the direct
+     * route rounds xᵢ − ξⱼ instead), a change of at most 2⁻⁵³·(|x₀| + |ξ₀| + |vt/R| +
+     * (N + N_out)Δ) in position, hence of c by that times max|∂c/∂x| ≤ e^{−μt/R}·(max|slope|
+     * + (|f₀| + |f_{N−1}|)/(L√π)) (the end jumps of zero-extended data); counted 4 times.
+     */
+    private static double positionError(InfiniteLineKernel.Frozen s, PiecewiseLinearProfile p,
+                                        double outOrigin, int nOut) {
+        final double[] f = p.valuesView();
+        final int n = f.length;
+        double slope = 0;
+        for (int j = 1; j < n; j++) {
+            slope = Math.max(slope, Math.abs(f[j] - f[j - 1]));
+        }
+        slope /= p.spacing();
+        if (p.extension() == PiecewiseLinearProfile.Extension.ZERO) {
+            slope += (Math.abs(f[0]) + Math.abs(f[n - 1])) / (s.width() * SegmentIntegrals.SQRT_PI);
+        }
+        final double reach = Math.abs(outOrigin) + Math.abs(p.origin()) + Math.abs(s.drift())
+            + ((double) n + nOut) * p.spacing();
+        return 4 * U * reach * slope * s.decay();
     }
 
     /** erfc(CUT) rounded up: the kernel mass outside the window. */

@@ -161,7 +161,10 @@ public final class ProfileConvolution implements Solution1D {
      * the weights' rounding (about 1.7e-14·max|f|·e^{−μt/R} at most) and the summation:
      * K·2⁻⁵³·max|f|·e^{−μt/R} for the window, and for the FFT the first-order bound of
      * Higham (2002, Thm 24.2) carried through the product, about
-     * 2·log₂M·7·2⁻⁵³·(3‖f‖₂‖H‖₁ + 2.5‖f‖₁‖H‖₂). The bound is absolute: where the solution
+     * 2·log₂M·7·2⁻⁵³·(3‖f‖₂‖H‖₁ + 2.5‖f‖₁‖H‖₂); plus the rounding of the positions,
+     * 4·2⁻⁵³·(|x₀| + |ξ₀| + |vt/R| + (N + N_out)Δ)·max|∂c/∂x| with
+     * max|∂c/∂x| ≤ e^{−μt/R}·(max|slope| + (|f₀| + |f_{N−1}|)/(L√π)) (the last term only for
+     * zero extension, whose ends are jumps). The bound is absolute: where the solution
      * is far below max|f| (far tails), use {@link #values} for relative accuracy. The data
      * are validated finite and scaled by a power of two before the FFT, so no element can
      * overflow or turn the transform into NaN.
