@@ -3,7 +3,8 @@ package org.advecta.convolution;
 import java.util.Arrays;
 import java.util.function.DoubleUnaryOperator;
 import org.advecta.internal.Checks;
-import org.advecta.special.ExpErfc;
+import org.advecta.special.ErrorFunctions;
+import org.advecta.special.Exponentials;
 import org.advecta.transport.TransportParameters;
 
 /**
@@ -15,6 +16,8 @@ import org.advecta.transport.TransportParameters;
  * c(x, t) = ∫₀ᵗ g(s)·K(x, t − s) ds,   K(x, τ) = (1/R)·k(x, τ/R)·exp(−μτ/R)
  * first type:  k(x, τ) = x / √(4πDτ³) · exp(−(x − vτ)²/(4Dτ))
  * third type:  k(x, τ) = v/√(πDτ) · exp(−(x − vτ)²/(4Dτ)) − (v²/(2D))·exp(vx/D)·erfc((x + vτ)/√(4Dτ))
+ *                      = (2v/ℓ)·exp(−a²)·[−½erfcx′(b) + (x/ℓ)·erfcx(b)],
+ *              ℓ = √(4Dτ),  a = (x − vτ)/ℓ,  b = (x + vτ)/ℓ   (evaluated form, no cancellation)
  * </pre>
  * K is the response to a unit Dirac input: the time derivative of the constant-input
  * solution (Ogata &amp; Banks 1961; for the third type the flux-injection impulse response,
@@ -188,15 +191,18 @@ public final class FunctionInlet {
         final double decay = -parameters.decayRate() * tp;
         final double len = Math.sqrt(4 * d * tp);
         final double a = (x - v * tp) / len;
-        final double gauss = Math.exp(decay - a * a);
+        final double gauss = Exponentials.expMinusSquare(decay, a);
         if (condition == InletCondition.FIRST_TYPE) {
             // x/√(4πDτ³)·exp(−a²) = x/(len·τ√π)·exp(−a²)
             return x / (len * tp * SegmentIntegrals.SQRT_PI) * gauss / r;
         }
+        // exp(vx/D)·erfc(b) = exp(−a²)·erfcx(b) (b² − a² = vx/D), and with
+        // β = vτ/len = b − x/len the bracket 1/√π − β·erfcx(b) becomes
+        // −½erfcx′(b) + (x/len)·erfcx(b): two non-negative terms, no cancellation
         final double b = (x + v * tp) / len;
-        // exp(vx/D − μτ)·erfc(b): the product without overflow
-        final double tail = ExpErfc.value(v * x / d + decay, b);
-        return (v / (SegmentIntegrals.SQRT_PI * 0.5 * len) * gauss - v * v / (2 * d) * tail) / r;
+        final double bracket = -0.5 * ErrorFunctions.erfcxDerivative(b)
+            + x / len * ErrorFunctions.erfcx(b);
+        return 2 * v / len * bracket * gauss / r;
     }
 
     private final class Integrand implements AdaptiveKronrod.Integrand {
