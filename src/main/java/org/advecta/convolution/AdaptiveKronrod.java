@@ -9,10 +9,11 @@ package org.advecta.convolution;
  * <p>Each interval carries its Gauss (G₇) and Kronrod (K₁₅) sums; the interval whose
  * |K₁₅ − G₇| is largest is bisected until Σ|K₁₅ − G₇| ≤ max(abs, rel·|ΣK₁₅|), the interval
  * budget is spent, or no interval can be split further. The value returned is ΣG₇ and its
- * error estimate is 2·|Σ(K₁₅ − G₇)| plus a rounding allowance 50·2⁻⁵³·Σ∫|f| (the latter as
+ * error estimate is 2·Σ|K₁₅ − G₇| plus a rounding allowance 50·2⁻⁵³·Σ∫|f| (the latter as
  * QUADPACK): since K₁₅ is far more accurate than G₇ on a resolved interval, K₁₅ − G₇ is
  * the error of G₇ itself to within a small factor, and the estimate neither understates nor
- * grossly overstates it. (Returning K₁₅ would make the estimate a bound many orders too
+ * grossly overstates it (the errors of separate intervals are added in magnitude: their
+ * signs do cancel at times, but not reliably). (Returning K₁₅ would make the estimate a bound many orders too
  * large.)
  */
 final class AdaptiveKronrod {
@@ -124,11 +125,11 @@ final class AdaptiveKronrod {
             final double t = sum + term;
             comp += Math.abs(sum) >= Math.abs(term) ? (sum - t) + term : (term - t) + sum;
             sum = t;
-            diff += kronrod[i] - gauss[i];
+            diff += Math.abs(kronrod[i] - gauss[i]);
             abssum += absolute[i];
         }
         value = sum + comp;
-        error = 2 * Math.abs(diff) + 50 * U * abssum;
+        error = 2 * diff + 50 * U * abssum;
     }
 
     /** Sets the result directly (no integration needed). */

@@ -90,6 +90,17 @@ public interface ConvolutionKernel {
         double value(double x, double xi);
 
         /**
+         * Returns G(x, ξ, t) at ξ = origin(x) + s, the offset s taken exactly (not rounded
+         * into ξ): quadrature in s then resolves a kernel far narrower than the spacing of
+         * doubles near ξ would allow.
+         *
+         * @param x position
+         * @param s offset of ξ from {@link #origin(double)}
+         * @return the kernel's value
+         */
+        double valueAtOffset(double x, double s);
+
+        /**
          * Returns ∂G/∂x at (x, ξ, t).
          *
          * @param x position

@@ -20,7 +20,7 @@ import org.advecta.transport.TransportParameters;
  * breakpoint and support end inside it) is integrated by globally adaptive 7/15-point
  * Gauss–Kronrod quadrature (QUADPACK's qk15 pair, Piessens et al. 1983), bisecting the
  * interval with the largest |K₁₅ − G₇| until Σ|K₁₅ − G₇| meets the tolerance. The value is
- * the Gauss sum and the error estimate 2·|Σ(K₁₅ − G₇)| + 50·2⁻⁵³·∫|φG|: the Kronrod sum is
+ * the Gauss sum and the error estimate 2·Σ|K₁₅ − G₇| + 50·2⁻⁵³·∫|φG|: the Kronrod sum is
  * far more accurate on resolved intervals, so the estimate tracks the actual error of the
  * returned value (within a factor of a few in the tests, never below it). Declare kinks and
  * jumps of φ as breakpoints: an undeclared one is found by bisection, but the estimate is then
@@ -42,6 +42,8 @@ public final class FunctionConvolution {
     private static final double REACH = 10;
     /** Interior split points in kernel widths. */
     private static final double INNER = 3;
+    /** Split points, in units of the tail's decay length, for data in the kernel's tail. */
+    private static final double[] TAIL_SPLITS = {0.25, 1, 3, 10, 30, 100};
     /** The interval budget per evaluation. */
     private static final int MAX_INTERVALS = 2000;
 
@@ -202,21 +204,24 @@ public final class FunctionConvolution {
     private final class Workspace implements AdaptiveKronrod.Integrand {
         final AdaptiveKronrod quadrature = new AdaptiveKronrod(MAX_INTERVALS);
         final double[] points;
-        final double[] inner = new double[3];
         ConvolutionKernel.Snapshot snapshot;
         double x;
+        double centre;
 
         Workspace(int breaks) {
-            points = new double[breaks + 7];
+            points = new double[breaks + 6 + TAIL_SPLITS.length];
         }
 
+        /** The integrand in the offset s = ξ − origin(x) (see valueAtOffset). */
         @Override
-        public double at(double xi) {
+        public double at(double s) {
+            // φ is never called outside its support, even where centre + s rounds across an end
+            final double xi = Math.min(upper, Math.max(lower, centre + s));
             final double f = phi.applyAsDouble(xi);
             if (!Double.isFinite(f)) {
                 throw Checks.fail("phi(" + xi + ")", f, "must be finite");
             }
-            return f == 0 ? 0.0 : f * snapshot.value(x, xi);
+            return f == 0 ? 0.0 : f * snapshot.valueAtOffset(x, s);
         }
     }
 
@@ -224,6 +229,7 @@ public final class FunctionConvolution {
         w.snapshot = s;
         w.x = x;
         final double centre = s.origin(x);
+        w.centre = centre;
         if (s.collapsed()) {
             final double v = centre >= lower && centre <= upper ? phi.applyAsDouble(centre) : 0.0;
             if (!Double.isFinite(v)) {
@@ -242,27 +248,42 @@ public final class FunctionConvolution {
             setZero(w, 0.0);
             return;
         }
-        int np = 0;
+        // candidate split points: the kernel's centre and ±3 widths, the breakpoints, and,
+        // for data wholly in the kernel's tail, points near the support's near end on the
+        // scale ℓ = L²/(2·gap) on which the integrand falls off there
         final double[] pts = w.points;
-        pts[np++] = a;
-        final double[] inner = w.inner;
-        inner[0] = centre - INNER * l;
-        inner[1] = centre;
-        inner[2] = centre + INNER * l;
-        int bi = 0;
-        int ii = 0;
-        while (bi < breakpoints.length || ii < inner.length) {
-            final double next;
-            if (ii >= inner.length || (bi < breakpoints.length && breakpoints[bi] < inner[ii])) {
-                next = breakpoints[bi++];
-            } else {
-                next = inner[ii++];
-            }
-            if (next > pts[np - 1] && next < b) {
-                pts[np++] = next;
+        int nc = 0;
+        pts[nc++] = centre - INNER * l;
+        pts[nc++] = centre;
+        pts[nc++] = centre + INNER * l;
+        for (double bp : breakpoints) {
+            pts[nc++] = bp;
+        }
+        if (gap > INNER * l) {
+            final double scale = l * l / (2 * gap);
+            for (double k : TAIL_SPLITS) {
+                pts[nc++] = lower > centre ? a + k * scale : b - k * scale;
             }
         }
+        Arrays.sort(pts, 0, nc);
+        // keep those strictly inside (a, b), increasing, after a
+        int np = 0;
+        double previous = a;
+        for (int i = 0; i < nc; i++) {
+            if (pts[i] > previous && pts[i] < b) {
+                previous = pts[i];
+                pts[np++] = previous;
+            }
+        }
+        System.arraycopy(pts, 0, pts, 1, np);
+        pts[0] = a;
+        np++;
         pts[np++] = b;
+        // integrate in the offset from the centre, so that a kernel narrower than the
+        // spacing of doubles near ξ is still resolved (the quadrature nodes are exact offsets)
+        for (int i = 0; i < np; i++) {
+            pts[i] -= centre;
+        }
         w.quadrature.integrate(w, pts, np, absTol, relTol);
     }
 

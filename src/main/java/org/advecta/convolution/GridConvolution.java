@@ -193,11 +193,15 @@ final class GridConvolution {
         final int kh = hat.length;
         for (int i = 0; i < out.length; i++) {
             // e = i − j − hLo ∈ [0, kh) ⟺ j ∈ (i − hLo − kh, i − hLo]
-            final long jHi = Math.min(n - 1L, i - hLo);
-            final long jLo = Math.max(0L, i - hLo - kh + 1);
+            final long base = i - hLo;
+            final int jHi = (int) Math.min(n - 1L, base);
+            final int jLo = (int) Math.max(0L, base - kh + 1);
             double sum = 0;
-            for (long j = jLo; j <= jHi; j++) {
-                sum = Math.fma(f[(int) j], hat[(int) (i - hLo - j)], sum);
+            if (jLo <= jHi) {
+                final int b = (int) (base - jLo);
+                for (int j = jLo, e = b; j <= jHi; j++, e--) {
+                    sum = Math.fma(f[j], hat[e], sum);
+                }
             }
             out[i] = sum;
         }

@@ -180,6 +180,26 @@ public final class InfiniteLineKernel implements ConvolutionKernel {
         }
 
         @Override
+        public double valueAtOffset(double x, double s) {
+            // X = x − vt/R exactly is o + r, o = origin(x) rounded, r its rounding error
+            // (two two-differences); y = (X − ξ)/L = (r − s)/L
+            final double t1 = x - driftHigh;
+            final double e1 = twoSumError(x, -driftHigh, t1);
+            final double o = t1 - driftLow;
+            final double e2 = twoSumError(t1, -driftLow, o);
+            if (collapsed) {
+                return s == e1 + e2 ? Double.POSITIVE_INFINITY : 0.0;
+            }
+            return decay * norm * Exponentials.expMinusSquare(spread.scaled((e1 + e2) - s));
+        }
+
+        /** The exact error of the rounded sum s = a + b (Knuth's two-sum). */
+        private static double twoSumError(double a, double b, double s) {
+            final double bb = s - a;
+            return (a - (s - bb)) + (b - bb);
+        }
+
+        @Override
         public double gradient(double x, double xi) {
             if (collapsed) {
                 return 0.0;

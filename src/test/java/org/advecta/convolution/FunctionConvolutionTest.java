@@ -22,7 +22,7 @@ import org.junit.jupiter.api.Test;
  */
 class FunctionConvolutionTest {
 
-    private static final String DIR = "/fixtures/convolution/";
+    private static final String DIR = "fixtures/convolution/";
 
 
     private static FunctionConvolution fixtureFunction(String name, TransportParameters p) {

@@ -23,7 +23,7 @@ import org.junit.jupiter.api.Test;
  */
 class InletDuhamelTest {
 
-    private static final String DIR = "/fixtures/convolution/";
+    private static final String DIR = "fixtures/convolution/";
     private static final double[] TABLE_TIMES = {0.0, 0.25, 0.5, 1.0, 1.5, 2.0, 3.0};
     private static final TransportParameters[] PS = {
         TransportParameters.of(1.0, 0.1),
