@@ -20,7 +20,8 @@ import org.advecta.transport.TransportParameters;
  * breakpoint and support end inside it) is integrated by globally adaptive 7/15-point
  * Gauss–Kronrod quadrature (QUADPACK's qk15 pair, Piessens et al. 1983), bisecting the
  * interval with the largest |K₁₅ − G₇| until Σ|K₁₅ − G₇| meets the tolerance. The value is
- * the Gauss sum and the error estimate 2·Σ|K₁₅ − G₇| + 50·2⁻⁵³·∫|φG|: the Kronrod sum is
+ * the Gauss sum and the error estimate 2·|Σ(K₁₅ − G₇)| + 0.02·Σ|K₁₅ − G₇| +
+ * 50·2⁻⁵³·∫|φG|: the Kronrod sum is
  * far more accurate on resolved intervals, so the estimate tracks the actual error of the
  * returned value (within a factor of a few in the tests, never below it). Declare kinks and
  * jumps of φ as breakpoints: an undeclared one is found by bisection, but the estimate is then

@@ -25,8 +25,8 @@ import org.advecta.transport.TransportParameters;
  * <p><b>Accuracy.</b> Train: each term within the kernel's max(16, 2κ) ULP, summed with
  * compensation. Continuous: the Gauss sum of an adaptive 7/15-point Gauss–Kronrod quadrature
  * over [0, t], split at the declared breakpoints of q, returned with the estimate
- * 2·Σ|K₁₅ − G₇| + 50·2⁻⁵³·∫|qG| (see {@link FunctionConvolution}). At x = x₀ the
- * integrand has an integrable 1/√(t − s) singularity at s = t, resolved by bisection.
+ * 2·|Σ(K₁₅ − G₇)| + 0.02·Σ|K₁₅ − G₇| + 50·2⁻⁵³·∫|qG| (see {@link FunctionConvolution}).
+ * At x = x₀ the integrand has an integrable 1/√(t − s) singularity at s = t, resolved by bisection.
  */
 public final class PointRelease {
 
