@@ -57,6 +57,15 @@ public interface ConvolutionKernel {
         boolean collapsed();
 
         /**
+         * Returns true if G depends on x − ξ alone (so ∂G/∂x = −∂G/∂ξ): the gradient of a
+         * profile is then summed from its slopes and jumps, each term separately, which
+         * avoids the cancellation of per-segment end terms.
+         *
+         * @return whether the kernel is translation invariant
+         */
+        boolean translationInvariant();
+
+        /**
          * Returns the factor exp(−μt/R) by which the total mass has decayed.
          *
          * @return the decay factor

@@ -83,8 +83,10 @@ final class GridConvolution {
         for (int e = 0; e < k; e++) {
             final long d = dLo + e;
             final double m = s.scale(Math.fma(d - 0.5, step, shift));
-            a[e] = decay * InfiniteLineKernel.Frozen.weights(m, h, 1.0, 0.0);
-            b[e] = decay * InfiniteLineKernel.Frozen.weights(m, h, 0.0, 1.0);
+            final double lo = s.scale(Math.fma(d - 1.0, step, shift));
+            final double hi = s.scale(Math.fma(d, step, shift));
+            a[e] = decay * InfiniteLineKernel.Frozen.weights(m, h, lo, hi, 1.0, 0.0);
+            b[e] = decay * InfiniteLineKernel.Frozen.weights(m, h, lo, hi, 0.0, 1.0);
         }
         // hat weights H(d) = A(d) + B(d + 1) for d in [dLo − 1, dHi]
         final int kh = k + 1;

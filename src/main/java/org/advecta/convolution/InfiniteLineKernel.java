@@ -109,6 +109,11 @@ public final class InfiniteLineKernel implements ConvolutionKernel {
         }
 
         @Override
+        public boolean translationInvariant() {
+            return true;
+        }
+
+        @Override
         public double decay() {
             return decay;
         }
@@ -131,7 +136,20 @@ public final class InfiniteLineKernel implements ConvolutionKernel {
          * @return the scaled distance y
          */
         double scaled(double x, double xi) {
-            return spread.scaled(((x - xi) - driftHigh) - driftLow);
+            return spread.scaled(distance(x, xi));
+        }
+
+        /**
+         * Returns x − vt/R − ξ with one rounding: x − ξ and the subtraction of the drift
+         * are carried exactly (two-sums), so an x near ξ far from the origin keeps its
+         * small distance to full relative accuracy.
+         */
+        double distance(double x, double xi) {
+            final double d = x - xi;
+            final double e = twoSumError(x, -xi, d);
+            final double d2 = d - driftHigh;
+            final double e2 = twoSumError(d, -driftHigh, d2);
+            return d2 + ((e + e2) - driftLow);
         }
 
         /**
@@ -228,23 +246,32 @@ public final class InfiniteLineKernel implements ConvolutionKernel {
                 final double wb = (o - a) / (b - a);
                 return decay * (fa * (1 - wb) + fb * wb);
             }
-            final double centre = 0.5 * a + 0.5 * b;
-            final double m = scaled(x, centre);
+            // the ends in y each with one rounding, the centre from their mean
+            final double da = distance(x, a);
+            final double db = distance(x, b);
+            final double hi = scale(da);
+            final double lo = scale(db);
+            final double m = scale(0.5 * da + 0.5 * db);
             final double h = scale(0.5 * b - 0.5 * a);
-            return decay * weights(m, h, fa, fb);
+            return decay * weights(m, h, lo, hi, fa, fb);
         }
 
         /** fa·rising(m, h) + fb·rising(−m, h), the far-tail test first. */
         static double weights(double m, double h, double fa, double fb) {
+            return weights(m, h, m - h, m + h, fa, fb);
+        }
+
+        /** As {@link #weights(double, double, double, double)} with the ends given. */
+        static double weights(double m, double h, double lo, double hi, double fa, double fb) {
             if (Math.abs(m) - h >= SegmentIntegrals.FAR || !(h < HUGE_HALF_WIDTH)) {
                 return Math.abs(m) - h >= SegmentIntegrals.FAR ? 0.0 : wide(m, h, fa, fb);
             }
             double r = 0;
             if (fa != 0) {
-                r += fa * SegmentIntegrals.rising(m, h);
+                r += fa * SegmentIntegrals.rising(m, h, lo, hi);
             }
             if (fb != 0) {
-                r += fb * SegmentIntegrals.rising(-m, h);
+                r += fb * SegmentIntegrals.rising(-m, h, -hi, -lo);
             }
             return r;
         }
@@ -273,12 +300,17 @@ public final class InfiniteLineKernel implements ConvolutionKernel {
             if (!(b > a) || collapsed) {
                 return 0.0;
             }
-            final double centre = 0.5 * a + 0.5 * b;
-            final double m = scaled(x, centre);
+            final double da = distance(x, a);
+            final double db = distance(x, b);
+            final double m = scale(0.5 * da + 0.5 * db);
             final double h = scale(0.5 * b - 0.5 * a);
-            double r = fa * value(x, a) - fb * value(x, b);
+            final double ya = scale(da);
+            final double yb = scale(db);
+            // φ(a)G(a) − φ(b)G(b) + φ′·∫ₐᵇ G dξ  (∂G/∂x = −∂G/∂ξ, by parts)
+            double r = decay * norm * (fa * Exponentials.expMinusSquare(ya)
+                - fb * Exponentials.expMinusSquare(yb));
             if (fa != fb) {
-                r += (fb - fa) / (b - a) * (decay * SegmentIntegrals.mass(m, h));
+                r += (fb - fa) / (b - a) * (decay * SegmentIntegrals.mass(m, h, yb, ya));
             }
             return r;
         }

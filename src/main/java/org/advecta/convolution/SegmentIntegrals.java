@@ -56,6 +56,21 @@ final class SegmentIntegrals {
      * @return the weight, in [0, ½·(erf(m + h) − erf(m − h))]
      */
     static double rising(double m, double h) {
+        return rising(m, h, m - h, m + h);
+    }
+
+    /**
+     * Returns rising(m, h) with the ends lo = m − h and hi = m + h given separately, each
+     * computed from the positions with a single rounding (m − h would add the rounding of
+     * m, up to 2⁻⁵³·|m|, to an end near 0 where the weight is most sensitive).
+     *
+     * @param m the segment's centre in y
+     * @param h its half-width, ≥ 0
+     * @param lo its lower end in y (≈ m − h)
+     * @param hi its upper end in y (≈ m + h)
+     * @return the weight
+     */
+    static double rising(double m, double h, double lo, double hi) {
         if (h == 0) {
             return 0.0;
         }
@@ -69,8 +84,6 @@ final class SegmentIntegrals {
             }
             return h * sum * (0.5 * ONE_OVER_SQRT_PI);
         }
-        final double lo = m - h;
-        final double hi = m + h;
         if (lo >= FAR || hi <= -FAR) {
             return 0.0;
         }
@@ -83,7 +96,9 @@ final class SegmentIntegrals {
         } else {
             // lo < 0 < hi: both terms are non-negative except a first term of at most ½
             // against a second one at least (−lo)·T₀-size; measured loss below a factor 2
-            final double mass = 0.5 * SQRT_PI * ErrorFunctions.erfDifferenceCentred(m, h);
+            // erf(hi) − erf(lo) from the accurate ends (not erf(m ± h): m ± h would round an
+            // end near 0 by 2⁻⁵³·|m|); lo < 0 < hi, so no cancellation
+            final double mass = 0.5 * SQRT_PI * ErrorFunctions.erfDifference(hi, lo);
             p = 0.5 * (Exponentials.expMinusSquare(lo) - Exponentials.expMinusSquare(hi))
                 + (-lo) * mass;
         }
@@ -99,6 +114,24 @@ final class SegmentIntegrals {
      */
     static double mass(double m, double h) {
         return 0.5 * ErrorFunctions.erfDifferenceCentred(m, h);
+    }
+
+    /**
+     * Returns the mass with the ends given separately (see
+     * {@link #rising(double, double, double, double)}): narrow segments from m and h,
+     * others from erf(hi) − erf(lo), which then does not cancel.
+     *
+     * @param m centre
+     * @param h half-width, ≥ 0
+     * @param lo lower end
+     * @param hi upper end
+     * @return the mass
+     */
+    static double mass(double m, double h, double lo, double hi) {
+        if (h < NARROW_HALF_WIDTH && 4 * Math.abs(m) * h < 1) {
+            return 0.5 * ErrorFunctions.erfDifferenceCentred(m, h);
+        }
+        return 0.5 * ErrorFunctions.erfDifference(hi, lo);
     }
 
     /** T₀(y) = ∫_y^∞ exp(−s²) ds for y ≥ 0. */

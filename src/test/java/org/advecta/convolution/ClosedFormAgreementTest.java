@@ -51,6 +51,17 @@ class ClosedFormAgreementTest {
         final double rel = Math.max(RELATIVE, 8 * kappa * 0x1.0p-53);
         assertEquals(e, a, rel * Math.abs(e) + 1e-300 * scale,
             () -> "x=" + x + " t=" + t + " " + expected.parameters());
+        // the gradient: Σ jumps·G at the edges, judged against the size of those terms
+        // (it passes through 0 at a box's centre)
+        double size = 0;
+        for (double edge : edges) {
+            final double y = (x - drift - edge) / len;
+            size += scale / (len * Math.sqrt(Math.PI)) * Math.exp(-y * y);
+        }
+        final double ge = expected.gradient(x, t);
+        final double ga = actual.gradient(x, t);
+        assertEquals(ge, ga, rel * size + 1e-300 * scale / len,
+            () -> "gradient x=" + x + " t=" + t + " " + expected.parameters());
     }
 
     @Test
