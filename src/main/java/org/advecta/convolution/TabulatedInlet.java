@@ -10,9 +10,11 @@ import org.advecta.solution.ThirdTypeInlet;
 import org.advecta.transport.TransportParameters;
 
 /**
- * A clean half-line x ≥ 0 fed at x = 0 with a logged, piecewise-constant inlet concentration
- * series: g(t) = gₖ on (tₖ, tₖ₊₁], t₀ = 0, the last level held after the last time. Exact
- * superposition (Duhamel) of the constant-input closed forms. Immutable and thread-safe.
+ * A clean half-line x ≥ 0 fed at x = 0 with a logged inlet concentration series: piecewise
+ * constant ({@link #of}: g(t) = gₖ on (tₖ, tₖ₊₁], t₀ = 0, the last level held after the last
+ * time; exact superposition (Duhamel) of the constant-input closed forms) or piecewise
+ * linear ({@link #linear}: the time integral of the unit response by quadrature).
+ * Immutable and thread-safe.
  *
  * <pre>
  * c(x, t) = Σ_{k: tₖ &lt; t} (gₖ − gₖ₋₁) · U(x, t − tₖ),   g₋₁ = 0
@@ -35,10 +37,17 @@ public final class TabulatedInlet implements Solution1D {
     private final InletCondition condition;
     private final double[] times;
     private final double[] jumps;
+    /** Changes of slope at each time (piecewise-linear series), null for steps. */
+    private final double[] kinks;
     private final Solution1D unit;
 
+    /** Relative tolerance of each time integral of the unit response (linear series). */
+    private static final double RAMP_TOLERANCE = 1e-13;
+    /** Interval budget of each such integral (smooth integrands need a few). */
+    private static final int RAMP_INTERVALS = 200;
+
     private TabulatedInlet(TransportParameters parameters, InletCondition condition,
-                           double[] times, double[] levels) {
+                           double[] times, double[] levels, boolean linear) {
         if (parameters == null) {
             throw new IllegalArgumentException("parameters: must not be null");
         }
@@ -67,6 +76,22 @@ public final class TabulatedInlet implements Solution1D {
             jumps[k] = levels[k] - previous;
             previous = levels[k];
         }
+        if (linear) {
+            // g(t) = g₀ + Σₖ (sₖ − sₖ₋₁)(t − tₖ)₊, sₖ the slope on (tₖ, tₖ₊₁], 0 after the last
+            this.kinks = new double[levels.length];
+            double slopeBefore = 0;
+            for (int k = 0; k < levels.length; k++) {
+                final double slope = k + 1 < levels.length
+                    ? (levels[k + 1] - levels[k]) / (times[k + 1] - times[k]) : 0.0;
+                kinks[k] = slope - slopeBefore;
+                slopeBefore = slope;
+                if (k > 0) {
+                    jumps[k] = 0.0;
+                }
+            }
+        } else {
+            this.kinks = null;
+        }
         this.parameters = parameters;
         this.condition = condition;
         this.unit = condition == InletCondition.FIRST_TYPE
@@ -86,7 +111,67 @@ public final class TabulatedInlet implements Solution1D {
      */
     public static TabulatedInlet of(TransportParameters parameters, InletCondition condition,
                                     double[] times, double[] levels) {
-        return new TabulatedInlet(parameters, condition, times, levels);
+        return new TabulatedInlet(parameters, condition, times, levels, false);
+    }
+
+    /**
+     * Returns the solution for a series interpolated linearly between its points: g(t)
+     * linear from (tₖ, gₖ) to (tₖ₊₁, gₖ₊₁), g₀ from t = 0⁺, the last level held after the
+     * last time.
+     *
+     * <pre>
+     * c(x, t) = g₀·U(x, t) + Σ_{k: tₖ &lt; t} (sₖ − sₖ₋₁)·W(x, t − tₖ),   W(x, τ) = ∫₀^τ U(x, s) ds
+     * </pre>
+     * with sₖ the slope after tₖ (Duhamel for a ramp input: the response to g(t) = t is the
+     * time integral of the unit response). W is integrated by adaptive Gauss–Kronrod to
+     * 1e-13 relative with an error estimate (see {@link #valueWithError}); the ramp's closed
+     * form is not used.
+     *
+     * @param parameters v, D, R, μ (v &gt; 0 for the third type)
+     * @param condition the inlet condition
+     * @param times t₀ = 0 &lt; t₁ &lt; …, finite; not modified (copied)
+     * @param levels gₖ, finite; not modified (copied)
+     * @return the solution
+     * @throws IllegalArgumentException if an argument is invalid
+     */
+    public static TabulatedInlet linear(TransportParameters parameters, InletCondition condition,
+                                        double[] times, double[] levels) {
+        return new TabulatedInlet(parameters, condition, times, levels, true);
+    }
+
+    /**
+     * Returns c(x, t) with an error estimate: 0 for a step series (exact superposition of
+     * closed forms, each within its contract), the sum of |sₖ − sₖ₋₁| times the quadrature
+     * estimates of W for a linear series.
+     *
+     * @param x position, finite and ≥ 0
+     * @param t time, finite and ≥ 0
+     * @return the value and its estimate
+     * @throws IllegalArgumentException if x or t is invalid
+     */
+    public Estimate valueWithError(double x, double t) {
+        final double steps = stepValue(x, t);
+        if (kinks == null || t == 0) {
+            return Estimate.of(steps, 0.0);
+        }
+        double sum = steps;
+        double comp = 0;
+        double error = 0;
+        final AdaptiveKronrod q = new AdaptiveKronrod(RAMP_INTERVALS);
+        final double[] ends = new double[2];
+        for (int k = 0; k < times.length && times[k] < t; k++) {
+            if (kinks[k] == 0) {
+                continue;
+            }
+            ends[1] = t - times[k];
+            q.integrate(s -> unit.value(x, s), ends, 2, 1e-300, RAMP_TOLERANCE);
+            final double term = kinks[k] * q.value();
+            final double u = sum + term;
+            comp += Math.abs(sum) >= Math.abs(term) ? (sum - u) + term : (term - u) + sum;
+            sum = u;
+            error += Math.abs(kinks[k]) * q.error();
+        }
+        return Estimate.of(sum + comp, error);
     }
 
     /**
@@ -108,8 +193,20 @@ public final class TabulatedInlet implements Solution1D {
         return Domain.HALF_LINE;
     }
 
+    /**
+     * Returns c(x, t) (for a linear series, the value of {@link #valueWithError}).
+     *
+     * @param x position, finite and ≥ 0
+     * @param t time, finite and ≥ 0
+     * @return c(x, t)
+     * @throws IllegalArgumentException if x or t is invalid
+     */
     @Override
     public double value(double x, double t) {
+        return kinks == null ? stepValue(x, t) : valueWithError(x, t).value();
+    }
+
+    private double stepValue(double x, double t) {
         Checks.nonNegative("x", x);
         Checks.nonNegative("t", t);
         double sum = 0;
@@ -129,8 +226,21 @@ public final class TabulatedInlet implements Solution1D {
         return sum + comp;
     }
 
+    /**
+     * Returns ∂c/∂x (step series only).
+     *
+     * @param x position, finite and ≥ 0
+     * @param t time, finite and ≥ 0
+     * @return ∂c/∂x
+     * @throws IllegalArgumentException if x or t is invalid
+     * @throws UnsupportedOperationException for a linear series (not implemented)
+     */
     @Override
     public double gradient(double x, double t) {
+        if (kinks != null) {
+            throw new UnsupportedOperationException(
+                "gradient of a linearly interpolated series is not implemented");
+        }
         Checks.nonNegative("x", x);
         Checks.nonNegative("t", t);
         double sum = 0;

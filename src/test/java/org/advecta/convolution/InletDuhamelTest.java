@@ -162,6 +162,67 @@ class InletDuhamelTest {
     }
 
     @Test
+    void linearSeriesMatchesTheImpulseResponseQuadrature() {
+        // two independent quadratures: the time integral of the unit (step) response per kink
+        // against Duhamel's integral of the interpolated input times the impulse response
+        final double[] times = {0.0, 0.4, 1.0, 1.8, 3.0};
+        final double[] levels = {0.5, 2.0, 1.2, 1.5, 0.25};
+        for (TransportParameters p : PS) {
+            for (InletCondition c : InletCondition.values()) {
+                final TabulatedInlet series = TabulatedInlet.linear(p, c, times, levels);
+                final FunctionInlet f = FunctionInlet.of(p, c, s -> interpolate(times, levels, s))
+                    .withBreakpoints(times).withTolerance(1e-300, 1e-13);
+                for (double t : new double[] {0.3, 1.1, 2.5, 5.0}) {
+                    for (double x : new double[] {0.05, 0.6, 2.0}) {
+                        final Estimate a = series.valueWithError(x, t);
+                        final Estimate b = f.value(x, t);
+                        assertEquals(b.value(), a.value(), a.error() + b.error()
+                            + 1e-14 * Math.abs(b.value()) + 1e-300, c + " x=" + x + " t=" + t);
+                        assertEquals(a.value(), series.value(x, t), 0.0);
+                    }
+                }
+            }
+        }
+    }
+
+    private static double interpolate(double[] times, double[] levels, double s) {
+        for (int k = 0; k + 1 < times.length; k++) {
+            if (s <= times[k + 1]) {
+                final double w = (s - times[k]) / (times[k + 1] - times[k]);
+                return levels[k] * (1 - w) + levels[k + 1] * w;
+            }
+        }
+        return levels[levels.length - 1];
+    }
+
+    @Test
+    void linearSeriesOfAnExponentialConvergesToItsClosedForm() {
+        // first type: 0 ≤ U ≤ 1 and the solution operator preserves order, so
+        // |c_PL − c_exp| ≤ sup|g_PL − g_exp| ≤ Δt²·λ²·C₀/8 (the interpolation error;
+        // maximum principle, common practice)
+        final double lambda = 0.15;
+        final double dt = 0.05;
+        final int n = 161;
+        final double[] times = new double[n];
+        final double[] levels = new double[n];
+        for (int k = 0; k < n; k++) {
+            times[k] = k * dt;
+            levels[k] = 2.0 * Math.exp(-lambda * times[k]);
+        }
+        for (TransportParameters p : PS) {
+            final TabulatedInlet series = TabulatedInlet.linear(p, InletCondition.FIRST_TYPE,
+                times, levels);
+            final Solution1D closed = FirstTypeInlet.of(p, InletInput.exponential(2.0, lambda));
+            for (double t : new double[] {0.5, 2.0, 7.5}) {
+                for (double x : new double[] {0.05, 0.6, 2.0}) {
+                    assertEquals(closed.value(x, t), series.value(x, t),
+                        dt * dt * lambda * lambda * 2.0 / 8 + 1e-13, "x=" + x + " t=" + t);
+                }
+            }
+        }
+    }
+
+    @Test
     void badInputIsRejected() {
         final TransportParameters p = TransportParameters.of(1, 1);
         assertThrows(IllegalArgumentException.class, () -> TabulatedInlet.of(p,
