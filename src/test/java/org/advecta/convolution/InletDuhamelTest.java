@@ -74,6 +74,8 @@ class InletDuhamelTest {
         final ReferenceTable table = ReferenceTable.load(DIR + "variable_inlet.csv");
         FixtureAudit.checkProvenance(table, "gen_convolution.py", DIR);
         int tables = 0;
+        int linears = 0;
+        double worstLinear = 0;
         int functions = 0;
         double worstTable = 0;
         double worstRatio = 0;
@@ -98,6 +100,19 @@ class InletDuhamelTest {
                 worstTable = Math.max(worstTable, err / exact.doubleValue());
                 assertTrue(err <= 1e-14 * exact.doubleValue(), r.line() + " got " + v);
                 tables++;
+            } else if (r.get("input").equals("linear")) {
+                final double[] levels = new double[TABLE_TIMES.length];
+                for (int k = 0; k < levels.length; k++) {
+                    levels[k] = Math.exp(-lambda * TABLE_TIMES[k]);
+                }
+                final Estimate e = TabulatedInlet.linear(p, InletCondition.FIRST_TYPE, TABLE_TIMES,
+                    levels).valueWithError(x, t);
+                final double err = Math.abs(new BigDecimal(e.value()).subtract(exact,
+                    MathContext.DECIMAL128).doubleValue());
+                worstLinear = Math.max(worstLinear, err / exact.doubleValue());
+                // the estimate plus the levels' and closed forms' rounding (1e-14 relative)
+                assertTrue(err <= e.error() + 1e-14 * exact.doubleValue(), r.line() + " got " + e);
+                linears++;
             } else {
                 for (double tol : new double[] {1e-12, 1e-6}) {
                     final Estimate e = FunctionInlet.of(p, InletCondition.FIRST_TYPE,
@@ -114,9 +129,10 @@ class InletDuhamelTest {
                 functions++;
             }
         }
-        System.out.printf("inlet fixture: %d table rows (worst relative error %.3g), %d function"
-            + " rows (worst estimate/error %.3g)%n", tables, worstTable, functions, worstRatio);
-        assertTrue(tables >= 20 && functions >= 20);
+        System.out.printf("inlet fixture: %d table rows (worst relative error %.3g), %d linear"
+            + " rows (worst %.3g), %d function rows (worst estimate/error %.3g)%n", tables,
+            worstTable, linears, worstLinear, functions, worstRatio);
+        assertTrue(tables >= 20 && linears >= 20 && functions >= 20);
     }
 
     @Test
