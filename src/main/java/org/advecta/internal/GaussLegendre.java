@@ -20,6 +20,35 @@ public final class GaussLegendre {
     }
 
     /**
+     * Returns the number of positive nodes (the rule has twice as many, symmetric about 0).
+     *
+     * @return 5
+     */
+    public static int halfSize() {
+        return NODES.length;
+    }
+
+    /**
+     * Returns the k-th positive node on [−1, 1], in increasing order.
+     *
+     * @param k index, 0 ≤ k &lt; {@link #halfSize()}
+     * @return the node
+     */
+    public static double node(int k) {
+        return NODES[k];
+    }
+
+    /**
+     * Returns the weight of the nodes ±{@link #node(int) node(k)}.
+     *
+     * @param k index, 0 ≤ k &lt; {@link #halfSize()}
+     * @return the weight
+     */
+    public static double weight(int k) {
+        return WEIGHTS[k];
+    }
+
+    /**
      * Returns ∫ f over [m − h, m + h] by the 10-point rule, summing the smaller weights first.
      *
      * @param f the integrand
