@@ -10,8 +10,10 @@ import org.advecta.internal.Checks;
  * <p>The error estimate is the sum, over the subintervals of the adaptive rule, of
  * |K₁₅ − G₇| (the difference between the 15-point Kronrod and the embedded 7-point Gauss
  * result, which overstates the error of the Kronrod value the estimate accompanies for
- * smooth integrands), plus a bound on the truncated tails of the integral. The tests check
- * that the exact value lies within it.
+ * smooth integrands), plus a bound on the truncated tails of the integral, plus the rounding
+ * of the exponents (8·2⁻⁵³ relative per unit of their size, which is what the inputs' own
+ * rounding implies). For a rate history or images it is the sum of the terms' bounds. The
+ * tests check that the exact value lies within it.
  */
 public final class Estimate {
 

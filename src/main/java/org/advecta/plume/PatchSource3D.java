@@ -35,9 +35,11 @@ import org.advecta.transport.TransportParameters;
  * {@link PointSource3D#massFlux(double, double)} with the total rate (the rectangle's
  * extent does not matter once the plane is integrated over).
  *
- * <p><b>Accuracy.</b> The returned error bound is at most 1e-10 relative (measured: below
- * 1e-12), and the exact value lies within it (checked against mpmath); the mass fluxes are
- * within max(16, 2κ) ULP, for a constant rate without absorbing walls.
+ * <p><b>Accuracy.</b> The exact value lies within the returned error bound (checked against
+ * mpmath), and for a constant rate without walls the bound is at most 1e-10 relative (it
+ * includes the rounding of the exponents); for a rate history or a wall it is the sum of the
+ * terms' bounds. The mass fluxes are within max(16, 2κ) ULP, for a constant rate without
+ * absorbing walls.
  *
  * <p><b>Domain.</b> Coordinates finite (points on the patch included); t finite and ≥ 0; the
  * steady state needs U = √(v² + 4μD_L) &gt; 0; with walls, points on the patch's side.
@@ -360,10 +362,15 @@ public final class PatchSource3D {
             // exponent at τ_c: Δx v/(2D_L) − a/τ_c − bτ_c = −ξ² − μτ_c/R − aYZ/τ_c
             final double xi = (r * dx - flow.velocity * tauC)
                 / (2 * Math.sqrt(flow.dL * r * tauC));
-            final double scale = ScaledExp.value(norm * Math.sqrt(tauC),
-                -flow.decay * tauC / r - aYZ / tauC, xi);
+            final double shift = -flow.decay * tauC / r - aYZ / tauC;
+            final double scale = ScaledExp.value(norm * Math.sqrt(tauC), shift, xi);
             value = scale * quadrature.value();
-            error = scale * (quadrature.error() + tail);
+            // quadrature and tails, plus rounding: of the prefactor's exponent (relative
+            // 8·2⁻⁵³ per unit of its size) and of the integrand's exponent, whose terms of size
+            // (α + β)|w| cancel near the peak, where |w| ~ √(CUT/(α + β))
+            error = scale * (quadrature.error() + tail) + Math.abs(value)
+                * LineSource2D.ROUNDING * (16 + 8 * (xi * xi - shift)
+                    + 8 * Math.sqrt(CUT * (alpha + beta)));
         }
     }
 }
