@@ -157,10 +157,13 @@ class PlumeProperties {
         final LineSource2D s = LineSource2D.of(p, 0, 0, 1.0);
         final double dl = p.dispersion();
         final double h = 1e-4;
-        final double width = 40 * Math.sqrt(p.transverseDispersion() * (xPlane + 1) / v);
+        // far off the axis c decays like exp(−|y|·U/(2√(D_L D_T))): cut where that is e^-45
+        final double u = Math.sqrt(v * v + 4 * mu * dl);
+        final double width = Math.max(40 * Math.sqrt(p.transverseDispersion() * (xPlane + 1) / v),
+            90 * Math.sqrt(dl * p.transverseDispersion()) / u);
         final double integral = Integrals.trapezoid(y -> v * s.steadyValue(xPlane, y)
                 - dl * (s.steadyValue(xPlane + h, y) - s.steadyValue(xPlane - h, y)) / (2 * h),
-            -width, width, 4000);
+            -width, width, 40000);
         final double f = s.steadyMassFlux(xPlane);
         assertEquals(f, integral, 1e-6 * f);
     }
