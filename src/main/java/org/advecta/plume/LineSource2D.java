@@ -22,8 +22,10 @@ import org.advecta.transport.TransportParameters;
  * c(∞) = q / (2π √(D_L D_T)) · e^s · [e^z K₀(z)],   z = rU/(2D_L)
  * </pre>
  * the time integral of the instantaneous kernel (Carslaw &amp; Jaeger 1959, §10.4; the integral
- * is Hantush's leaky-well function W(R r²/(4D_L t), z·2), Hantush &amp; Jacob 1955) and its
+ * is Hantush's leaky-well function W(u, β) at u = R r²/(4D_L t), β = z, Hantush &amp; Jacob 1955) and its
  * limit, 2K₀(z) (Abramowitz &amp; Stegun 9.6.24; the steady state of Bear 1972, §10.6).
+ * Citations recalled, not re-checked; both forms are checked against mpmath quadrature of the
+ * kernel in the fixtures.
  *
  * <p><b>Method.</b> The finite-time integral is evaluated in w = ln(τ/τ_c), τ_c the
  * integrand's peak (or t when the peak is later), where the integrand is

@@ -23,7 +23,9 @@ import org.advecta.transport.TransportParameters;
  * </pre>
  * the time integral of the instantaneous kernel (Carslaw &amp; Jaeger 1959, §10.4, moving point
  * source; Wexler 1992, USGS TWRI 3-B7, for the groundwater form; Hunt 1978, J. Hydraul. Div.
- * ASCE 104, for the steady state with decay). The exponential factors are written so that
+ * ASCE 104, for the steady state with decay; these citations and section numbers are recalled,
+ * not re-checked against the books; the formula itself is checked against quadrature of the
+ * kernel in the fixtures). The exponential factors are written so that
  * neither overflows at high Péclet number: e^(rU/D_L) erfc(B) = e^(−A²) erfcx(B) since
  * B² − A² = rU/D_L, and s is formed without cancellation (see the package documentation).
  *
