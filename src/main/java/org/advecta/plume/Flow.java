@@ -94,7 +94,7 @@ final class Flow {
      * @return c1·exp(s)·erfc(A) + c2·exp(s − A²)·erfcx(B)
      */
     double erfcPair(double s, double r, double t, double c1, double c2) {
-        final double root = 2 * Math.sqrt(dL * retardation * t);
+        final double root = 2 * Math.sqrt(dL * retardation) * Math.sqrt(t);
         final double rr = retardation * r;
         final double ut = u * t;
         final double a = (rr - ut) / root;

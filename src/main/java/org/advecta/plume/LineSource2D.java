@@ -56,6 +56,8 @@ public final class LineSource2D {
     /** Where the exponent of the truncated integrand reaches this, the tails are cut. */
     static final double CUT = 50;
     private static final double TAIL = Math.exp(-CUT);
+    /** |w| beyond which α e^|w| &gt; 1e300·α: the integrand is 0 there for any α ≥ MIN_VALUE. */
+    static final double FAR = 1500;
     /** 2⁻⁵³, the unit roundoff. */
     static final double ROUNDING = 0x1.0p-53;
 
@@ -298,7 +300,7 @@ public final class LineSource2D {
             final double ut = flow.u * t;
             final double wEnd;
             final double shift;
-            final double root = 2 * Math.sqrt(flow.dL * flow.retardation * t);
+            final double root = 2 * Math.sqrt(flow.dL * flow.retardation) * Math.sqrt(t);
             if (ut < rr) {
                 // peak after t: normalise at τ = t, where the exponent is s − A²
                 final double a = (rr - ut) / root;
@@ -313,8 +315,9 @@ public final class LineSource2D {
                 wEnd = Math.log(ut / rr);
                 shift = 0;
             }
-            final double lo = -Math.log1p((CUT + beta) / alpha);
-            final double hiCut = beta > 0 ? Math.log1p((CUT + alpha) / beta)
+            // (bounded by ±FAR, where even the smallest positive α, β make the integrand 0)
+            final double lo = Math.max(-FAR, -Math.log1p((CUT + beta) / alpha));
+            final double hiCut = beta > 0 ? Math.min(FAR, Math.log1p((CUT + alpha) / beta))
                 : Double.POSITIVE_INFINITY;
             final double hi = Math.min(wEnd, hiCut);
             double tail = TAIL / (alpha + beta + CUT);
@@ -326,8 +329,9 @@ public final class LineSource2D {
             value = scale * quadrature.value();
             // quadrature and tails, plus the rounding of the exponent s − A², whose terms are
             // formed from rounded inputs (relative 8·2⁻⁵³ per unit of |s| + A², as κ says)
-            error = scale * (quadrature.error() + tail)
-                + Math.abs(value) * ROUNDING * (16 + 8 * (Math.abs(s) + shift * shift));
+            error = value == 0 ? scale * (quadrature.error() + tail)
+                : scale * (quadrature.error() + tail)
+                    + Math.abs(value) * ROUNDING * (16 + 8 * (Math.abs(s) + shift * shift));
         }
     }
 }

@@ -361,16 +361,17 @@ public final class PatchSource3D {
             quadrature.integrate(this, lo, hi, 0.0);
             // exponent at τ_c: Δx v/(2D_L) − a/τ_c − bτ_c = −ξ² − μτ_c/R − aYZ/τ_c
             final double xi = (r * dx - flow.velocity * tauC)
-                / (2 * Math.sqrt(flow.dL * r * tauC));
+                / (2 * Math.sqrt(flow.dL * r) * Math.sqrt(tauC));
             final double shift = -flow.decay * tauC / r - aYZ / tauC;
             final double scale = ScaledExp.value(norm * Math.sqrt(tauC), shift, xi);
             value = scale * quadrature.value();
             // quadrature and tails, plus rounding: of the prefactor's exponent (relative
             // 8·2⁻⁵³ per unit of its size) and of the integrand's exponent, whose terms of size
             // (α + β)|w| cancel near the peak, where |w| ~ √(CUT/(α + β))
-            error = scale * (quadrature.error() + tail) + Math.abs(value)
-                * LineSource2D.ROUNDING * (16 + 8 * (xi * xi - shift)
-                    + 8 * Math.sqrt(CUT * (alpha + beta)));
+            error = value == 0 ? scale * (quadrature.error() + tail)
+                : scale * (quadrature.error() + tail) + Math.abs(value)
+                    * LineSource2D.ROUNDING * (16 + 8 * (xi * xi - shift)
+                        + 8 * Math.sqrt(CUT * (alpha + beta)));
         }
     }
 }
