@@ -2,6 +2,7 @@ package org.advecta.plume;
 
 import org.advecta.internal.Checks;
 import org.advecta.internal.ScaledExp;
+import org.advecta.quadrature.Estimate;
 import org.advecta.special.ModifiedBessel;
 import org.advecta.transport.TransportParameters;
 

@@ -11,7 +11,7 @@
  * with K₀; the mass flux through a plane x = const, which reduces every source to the
  * one-dimensional one) it is evaluated with overflow-free exp·erfc products; otherwise by
  * adaptive Gauss–Kronrod quadrature in log-time, returned with an error bound
- * ({@link org.advecta.plume.Estimate}).
+ * ({@link org.advecta.quadrature.Estimate}).
  *
  * <p>Common to all sources: a {@link org.advecta.plume.RateHistory} (piecewise-constant rate,
  * Duhamel superposition) and {@link org.advecta.plume.Wall}s parallel to the flow (method of

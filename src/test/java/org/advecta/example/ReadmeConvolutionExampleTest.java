@@ -7,7 +7,7 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import org.advecta.convolution.Estimate;
+import org.advecta.quadrature.Estimate;
 import org.advecta.convolution.FunctionConvolution;
 import org.advecta.convolution.GridMethod;
 import org.advecta.convolution.InletCondition;

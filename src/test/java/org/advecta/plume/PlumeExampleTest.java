@@ -2,6 +2,7 @@ package org.advecta.plume;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import org.advecta.quadrature.Estimate;
 import org.advecta.transport.TransportParameters;
 import org.junit.jupiter.api.Test;
 

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.advecta.quadrature.Estimate;
 import org.advecta.transport.TransportParameters;
 import org.junit.jupiter.api.Test;
 

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import org.advecta.quadrature.Estimate;
 import org.advecta.transport.TransportParameters;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.function.Executable;

@@ -7,6 +7,7 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
 import org.advecta.kernel.FreeSpaceKernel3D;
+import org.advecta.quadrature.Estimate;
 import org.advecta.testing.Integrals;
 import org.advecta.transport.TransportParameters;
 

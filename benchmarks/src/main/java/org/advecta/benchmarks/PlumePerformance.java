@@ -3,7 +3,7 @@ package org.advecta.benchmarks;
 import java.util.Locale;
 import java.util.SplittableRandom;
 import java.util.concurrent.TimeUnit;
-import org.advecta.plume.Estimate;
+import org.advecta.quadrature.Estimate;
 import org.advecta.plume.LineSource2D;
 import org.advecta.plume.PatchSource3D;
 import org.advecta.plume.PointSource3D;

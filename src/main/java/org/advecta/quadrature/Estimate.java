@@ -1,19 +1,18 @@
-package org.advecta.plume;
+package org.advecta.quadrature;
 
 import java.util.Locale;
 import org.advecta.internal.Checks;
 
 /**
- * A value computed by quadrature together with a bound on its error. Immutable and
- * thread-safe.
+ * A value computed by quadrature together with an estimate of its absolute error. Immutable
+ * and thread-safe.
  *
- * <p>The error estimate is the sum, over the subintervals of the adaptive rule, of
- * |K₁₅ − G₇| (the difference between the 15-point Kronrod and the embedded 7-point Gauss
- * result, which overstates the error of the Kronrod value the estimate accompanies for
- * smooth integrands), plus a bound on the truncated tails of the integral, plus the rounding
- * of the exponents (8·2⁻⁵³ relative per unit of their size, which is what the inputs' own
- * rounding implies). For a rate history or images it is the sum of the terms' bounds. The
- * tests check that the exact value lies within it.
+ * <p>Each method that returns one says what its error is: for the continuous sources of
+ * {@code org.advecta.plume} a bound (the sum over the adaptive rule's subintervals of
+ * |K₁₅ − G₇|, which overstates the error of the Kronrod value for smooth integrands, plus the
+ * truncated tails and the rounding of the exponents; the tests check that the exact value
+ * lies within it); for the routes of {@code org.advecta.convolution} a realistic estimate
+ * (the tests check that it exceeds the true error and stays within 100 times it).
  */
 public final class Estimate {
 
@@ -29,7 +28,7 @@ public final class Estimate {
      * Returns an estimate.
      *
      * @param value the value, finite
-     * @param error the absolute error bound, finite and ≥ 0
+     * @param error the absolute error estimate, finite and ≥ 0
      * @return the estimate
      * @throws IllegalArgumentException if an argument is not finite or the error is negative
      */
@@ -47,9 +46,10 @@ public final class Estimate {
     }
 
     /**
-     * Returns the estimated bound on the absolute error of {@link #value()}.
+     * Returns the estimated absolute error of {@link #value()} (a bound where the method
+     * that returned this estimate says so).
      *
-     * @return the absolute error bound, ≥ 0
+     * @return the absolute error estimate, ≥ 0
      */
     public double error() {
         return error;
@@ -69,12 +69,12 @@ public final class Estimate {
     }
 
     /**
-     * Returns the sum of this and another estimate (values added, error bounds added).
+     * Returns the sum of this and another estimate (values added, errors added).
      *
      * @param other the other estimate
      * @return the sum
      */
-    Estimate plus(Estimate other) {
+    public Estimate plus(Estimate other) {
         return new Estimate(value + other.value, error + other.error);
     }
 
@@ -84,7 +84,7 @@ public final class Estimate {
      * @param factor the factor
      * @return the scaled estimate
      */
-    Estimate times(double factor) {
+    public Estimate times(double factor) {
         return new Estimate(value * factor, error * Math.abs(factor));
     }
 
