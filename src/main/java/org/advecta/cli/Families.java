@@ -32,7 +32,7 @@ final class Families {
     private static final String HALF_LINE = "half-line x >= 0 (inlet at x = 0)";
 
     /** Every family, in listing order. */
-    static final List<Family> ALL = List.of(
+    static final List<Family> ALL = concat(List.of(
         new Family("step", "a step of concentration C0 on one side of x0 at t = 0",
             LINE, 1, specs(transport(false, 1),
                 ParamSpec.number("x0", "position of the step [L]").byDefault(0),
@@ -92,9 +92,15 @@ final class Families {
                 ParamSpec.number("z0", "release point in the third direction [L]").byDefault(0),
                 ParamSpec.number("M", "amount released per unit mobile-phase capacity, "
                     + "e.g. mass/porosity [C L^3]").byDefault(1)),
-            Families::release3d));
+            Families::release3d)), PlumeFamilies.all());
 
     private Families() {
+    }
+
+    private static List<Family> concat(List<Family> first, List<Family> second) {
+        final List<Family> all = new ArrayList<>(first);
+        all.addAll(second);
+        return List.copyOf(all);
     }
 
     /**
@@ -115,7 +121,7 @@ final class Families {
     }
 
     /** v, D, R, mu, and D_T (2D, 3D) and D_V (3D). */
-    private static List<ParamSpec> transport(boolean positiveVelocity, int dimensions) {
+    static List<ParamSpec> transport(boolean positiveVelocity, int dimensions) {
         final ParamSpec v = ParamSpec.number("v", positiveVelocity
             ? "velocity along x, into the domain [L/T]" : "velocity along x [L/T]");
         final List<ParamSpec> specs = new ArrayList<>(List.of(
@@ -149,7 +155,7 @@ final class Families {
     }
 
     /** The common specs followed by the family's own. */
-    private static List<ParamSpec> specs(List<ParamSpec> common, ParamSpec... own) {
+    static List<ParamSpec> specs(List<ParamSpec> common, ParamSpec... own) {
         final List<ParamSpec> all = new ArrayList<>(common);
         all.addAll(List.of(own));
         return all;
