@@ -289,9 +289,10 @@ final class Runner {
     private void breakthroughSummary(StringBuilder b) {
         final Scenario.Breakthrough bt = s.breakthrough;
         b.append('\n').append(String.format(Locale.ROOT,
-            "Breakthrough curves, t = %s to %s %s (%d samples; peaks and arrivals refined on "
+            "Breakthrough curves, t = %s to %s %s (%d samples; %s refined on "
                 + "the exact solution between samples)%n",
-            num(bt.t.from()), num(bt.t.to()), s.time, bt.t.points()));
+            num(bt.t.from()), num(bt.t.to()), s.time, bt.t.points(),
+            s.field.continuousSource() ? "arrivals" : "peaks and arrivals"));
         for (int k = 0; k < bt.at.size(); k++) {
             final Scenario.Probe q = bt.at.get(k);
             final double[] c = curves[k];
