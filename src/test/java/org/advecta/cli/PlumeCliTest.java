@@ -344,4 +344,50 @@ class PlumeCliTest {
         assertTrue(summary.contains("Plan view at t = 40 T, z = -1,"), summary);
         assertEquals(2, count(summary, "(no mass balance: a continuous source"), summary);
     }
+
+    /** The printed value in the row of a norm (column 1: absolute). */
+    private static double printedNorm(String out, String norm) {
+        for (String line : out.split("\n")) {
+            final String[] f = line.trim().split("\\s+");
+            if (f[0].equals(norm)) {
+                return Double.parseDouble(f[1]);
+            }
+        }
+        throw new AssertionError(norm + " missing from " + out);
+    }
+
+    /**
+     * check compares with the same values: zero norms for the library's values; at steady
+     * state without a t column (as eval), transient with one; and an error of 1e-3 in one
+     * value shows as L-infinity = 1e-3.
+     */
+    @Test
+    void checkAgainstASteadyAndATransientLineSource(@TempDir Path dir) throws IOException {
+        final LineSource2D s = LineSource2D.of(TransportParameters.of(1, 0.1)
+            .withDispersion(0.1, 0.01, 0.01), 0, 0, 1);
+        final StringBuilder steady = new StringBuilder("x,y,c\n");
+        final StringBuilder transientRows = new StringBuilder("x,y,t,c\n");
+        for (int i = 1; i <= 10; i++) {
+            for (int j = -2; j <= 2; j++) {
+                final double x = 0.5 * i;
+                final double y = 0.1 * j;
+                final double cs = s.steadyValue(x, y) + (i == 3 && j == 0 ? 1e-3 : 0.0);
+                steady.append(x).append(',').append(y).append(',').append(cs).append('\n');
+                transientRows.append(x).append(',').append(y).append(",2,")
+                    .append(s.value(x, y, 2)).append('\n');
+            }
+        }
+        final Path a = dir.resolve("steady.csv");
+        final Path b = dir.resolve("transient.csv");
+        Files.writeString(a, steady.toString(), StandardCharsets.UTF_8);
+        Files.writeString(b, transientRows.toString(), StandardCharsets.UTF_8);
+        final String out = Cli.run(args("check", a + " " + LINE, "steady=true")).ok();
+        assertEquals(1e-3, printedNorm(out, "Linf"), 1e-15, out);
+        final String out2 = Cli.run(args("check", b + " " + LINE)).ok();
+        for (String norm : List.of("L1", "L2", "Linf")) {
+            assertEquals(0.0, printedNorm(out2, norm), out2);
+        }
+        // the transient family needs t
+        Cli.run(args("check", a + " " + LINE)).userError("t");
+    }
 }
