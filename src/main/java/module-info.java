@@ -14,4 +14,5 @@ module org.advecta {
     exports org.advecta.transport;
     exports org.advecta.kernel;
     exports org.advecta.solution;
+    exports org.advecta.halfspace;
 }
