@@ -15,8 +15,8 @@ import org.advecta.transport.TransportParameters;
  * c = S(x, t; a) − S(x, t; b)
  * </pre>
  * with S the step of {@link HalfLineStep} (C₀ = 1), whose closed forms carry over. The
- * difference is used where it cannot cancel by more than a factor 2 (|S(b)| ≤ |S(a)|/2);
- * elsewhere (a thin box, or a point far downstream of the box, where both steps are nearly
+ * difference (and that of the gradients) is used where it cannot cancel by more than a
+ * factor 2 (opposite signs, or magnitudes more than a factor 2 apart); elsewhere (a thin box, or a point far downstream of the box, where both steps are nearly
  * equal) the integral of the kernel over the box is evaluated directly, by Gauss–Legendre
  * quadrature on pieces cut at the kernel's centres and halved adaptively, which cannot cancel
  * since the kernel is positive.
@@ -108,7 +108,7 @@ public final class HalfLineSlug implements Solution1D {
         }
         final double sa = engine.value(x, t, a);
         final double sb = engine.value(x, t, b);
-        if (Math.abs(sb) <= 0.5 * Math.abs(sa)) {
+        if (!cancels(sa, sb)) {
             return c0 * (sa - sb);
         }
         return c0 * quadrature(x, t, false);
@@ -125,10 +125,16 @@ public final class HalfLineSlug implements Solution1D {
         }
         final double ga = engine.gradient(x, t, a);
         final double gb = engine.gradient(x, t, b);
-        if (Math.abs(gb) <= 0.5 * Math.abs(ga)) {
+        if (!cancels(ga, gb)) {
             return c0 * (ga - gb);
         }
         return c0 * quadrature(x, t, true);
+    }
+
+    /** Whether p − q loses more than one bit: same sign and within a factor 2 (Sterbenz). */
+    private static boolean cancels(double p, double q) {
+        return (p > 0 && q > 0 || p < 0 && q < 0) && Math.abs(q) > 0.5 * Math.abs(p)
+            && Math.abs(p) > 0.5 * Math.abs(q);
     }
 
     private double quadrature(double x, double t, boolean gradient) {

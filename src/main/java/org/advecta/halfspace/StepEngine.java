@@ -50,6 +50,8 @@ final class StepEngine {
         final double k;
         final double fourMH;
         final double invL;
+        final double centre;
+        final double halfWidth;
         final double dh;
         final double vxOverD;
 
@@ -64,6 +66,8 @@ final class StepEngine {
             // β² − α² = 4x(a + vt/R)·R/(4Dt)
             this.fourMH = 4 * x * Math.fma(v / r, t, a) * s.high;
             this.invL = s.inverseLength();
+            this.centre = s.scaled(Math.fma(v / r, t, a));
+            this.halfWidth = s.scaled(x);
             this.dh = -mu / r * t;
             this.vxOverD = v * x / d;
         }
@@ -85,8 +89,10 @@ final class StepEngine {
             }
             return 0.5 * ExpErfc.value(q.dh, q.alpha) + tail;
         }
-        final double m = 0.5 * q.alpha + 0.5 * q.beta;
-        final double h = 0.5 * q.beta - 0.5 * q.alpha;
+        // centre (a + vt/R)/L and half-width x/L of [α, β], formed directly: β − α would lose
+        // the digits of a half-width far below the centre
+        final double m = q.centre;
+        final double h = q.halfWidth;
         final double absorbing = Phi.expTimesJ(q.dh, m, h, q.fourMH)
             + 0.5 * -Math.expm1(-q.k) * ExpErfc.value(q.fourMH + q.dh, q.beta);
         if (wall == Wall.ABSORBING) {
