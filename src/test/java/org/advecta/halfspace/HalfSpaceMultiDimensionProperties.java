@@ -183,4 +183,28 @@ class HalfSpaceMultiDimensionProperties {
         final double noise = 1e-14 * 2 * (r / ht + d / (len * hx) + Math.abs(v) / len);
         assertEquals(0.0, residual, 1e-6 * scale + noise, () -> "c = " + cv);
     }
+
+    @Property(tries = 300)
+    void finiteAtExtremes(@ForAll boolean absorbing, @ForAll boolean box,
+                          @ForAll @DoubleRange(min = -1e8, max = 1e8) double v,
+                          @ForAll @DoubleRange(min = -3, max = 2) double logD,
+                          @ForAll @DoubleRange(min = 0, max = 10) double mu,
+                          @ForAll @DoubleRange(min = 0, max = 5) double a,
+                          @ForAll @DoubleRange(min = -6, max = 1) double logWidth,
+                          @ForAll @DoubleRange(min = 0, max = 100) double x,
+                          @ForAll @DoubleRange(min = -9, max = 2) double logT) {
+        // no NaN or infinity on valid input, and a non-negative value (positive initial data);
+        // at most C₀ (maximum principle) unless a zero-flux wall piles up inflowing solute
+        final TransportParameters p = TransportParameters.of(v, Math.pow(10, logD)).withDecay(mu);
+        final Wall wall = absorbing ? Wall.ABSORBING : Wall.ZERO_FLUX;
+        final Solution1D c = box ? HalfLineSlug.of(p, wall, a, a + Math.pow(10, logWidth), 1.0)
+            : HalfLineStep.of(p, wall, a, 1.0);
+        final double t = Math.pow(10, logT);
+        final double value = c.value(x, t);
+        assertTrue(value >= 0 && value < Double.POSITIVE_INFINITY, "c = " + value);
+        if (absorbing || v >= 0) {
+            assertTrue(value <= 1 + 1e-12, "c = " + value);
+        }
+        assertTrue(Double.isFinite(c.gradient(x, t)), "gradient not finite");
+    }
 }
