@@ -9,12 +9,16 @@ import org.advecta.internal.GaussLegendre;
  * of Gaussians and erfc's of width L centred at x − vt/R and −x − vt/R. The interval is cut
  * at those centres ± multiples of L/2 and, geometrically, near both ends (where a far tail
  * concentrates its mass), and each piece is integrated by the 10-point Gauss–Legendre rule,
- * halved adaptively until two levels agree to 1e-15 of the local |f| integral.
+ * halved adaptively until two levels agree to 1e-16 of the whole |f| integral or to the
+ * rounding level of the piece.
  */
 final class KernelQuadrature {
 
-    private static final int MAX_DEPTH = 24;
-    private static final double TOLERANCE = 1e-15;
+    private static final int MAX_DEPTH = 16;
+    /** Accept a piece when two levels agree to this fraction of the whole |f| integral. */
+    private static final double GLOBAL_TOLERANCE = 1e-16;
+    /** ... or to this fraction of the piece itself (the rounding level of its values). */
+    private static final double LOCAL_TOLERANCE = 4e-16;
     private static final int CENTRE_STEPS = 24;
     private static final int END_STEPS = 40;
 
@@ -45,14 +49,26 @@ final class KernelQuadrature {
         }
         final double[] sorted = Arrays.copyOf(cuts, n);
         Arrays.sort(sorted);
-        double sum = 0;
-        double comp = 0;
+        // a first pass estimates the whole |f| integral, the scale of the tolerance
+        double scale = 0;
         double prev = a;
         for (double c : sorted) {
             if (c <= prev || c > b) {
                 continue;
             }
-            final double piece = adaptive(f, prev, c, 0);
+            scale += GaussLegendre.integrate(s -> Math.abs(f.applyAsDouble(s)),
+                0.5 * prev + 0.5 * c, 0.5 * c - 0.5 * prev);
+            prev = c;
+        }
+        final double tolerance = GLOBAL_TOLERANCE * scale;
+        double sum = 0;
+        double comp = 0;
+        prev = a;
+        for (double c : sorted) {
+            if (c <= prev || c > b) {
+                continue;
+            }
+            final double piece = adaptive(f, prev, c, 0, tolerance);
             // Neumaier summation
             final double s = sum + piece;
             comp += Math.abs(sum) >= Math.abs(piece) ? (sum - s) + piece : (piece - s) + sum;
@@ -62,17 +78,18 @@ final class KernelQuadrature {
         return sum + comp;
     }
 
-    private static double adaptive(DoubleUnaryOperator f, double lo, double hi, int depth) {
+    private static double adaptive(DoubleUnaryOperator f, double lo, double hi, int depth,
+                                   double tolerance) {
         final double m = 0.5 * lo + 0.5 * hi;
         final double h = 0.5 * hi - 0.5 * lo;
         final double whole = GaussLegendre.integrate(f, m, h);
         final double left = GaussLegendre.integrate(f, 0.5 * lo + 0.5 * m, 0.5 * h);
         final double right = GaussLegendre.integrate(f, 0.5 * m + 0.5 * hi, 0.5 * h);
         final double both = left + right;
-        final double scale = GaussLegendre.integrate(s -> Math.abs(f.applyAsDouble(s)), m, h);
-        if (depth >= MAX_DEPTH || Math.abs(both - whole) <= TOLERANCE * scale) {
+        final double gap = Math.abs(both - whole);
+        if (depth >= MAX_DEPTH || gap <= tolerance || gap <= LOCAL_TOLERANCE * Math.abs(both)) {
             return both;
         }
-        return adaptive(f, lo, m, depth + 1) + adaptive(f, m, hi, depth + 1);
+        return adaptive(f, lo, m, depth + 1, tolerance) + adaptive(f, m, hi, depth + 1, tolerance);
     }
 }
