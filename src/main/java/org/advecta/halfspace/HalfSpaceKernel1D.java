@@ -302,6 +302,8 @@ public final class HalfSpaceKernel1D {
         final double dl;
         final double t;
         final boolean limit;
+        /** norm·e^{−μt/R} for the bulk path of {@link #gaussTerm}, or 0 where it is not used. */
+        final double bulkScale;
 
         Frame(Spread s, double[] centre, double[] decay, double t) {
             this.s = s;
@@ -311,8 +313,21 @@ public final class HalfSpaceKernel1D {
             this.dl = decay[1];
             this.t = t;
             this.limit = s == null || s.collapsed;
+            final double scale = limit ? 0.0 : s.norm * Math.exp(dh);
+            this.bulkScale = scale >= BULK_SCALE_MIN && scale <= BULK_SCALE_MAX ? scale : 0.0;
         }
     }
+
+    /**
+     * The bulk path keeps the exponent above −BULK_EXPONENT and the multiplier
+     * m·norm·e^{−μt/R} in [BULK_SCALE_MIN, BULK_SCALE_MAX], so the result (at least 1e-40 ×
+     * e^{−600} ≈ 3e-301) is a normal double; there the exponent q = (x − ξ − vt/R)²R/(4Dt) is
+     * formed in plain double, whose few roundings move the result by a few units of q·2⁻⁵³,
+     * inside the contract's 2κ ULP as for {@link org.advecta.kernel.FreeSpaceKernel1D}.
+     */
+    private static final double BULK_EXPONENT = 600;
+    private static final double BULK_SCALE_MIN = 1e-40;
+    private static final double BULK_SCALE_MAX = 0x1.0p300;
 
     Frame frame(double t) {
         Checks.nonNegative("t", t);
@@ -324,6 +339,15 @@ public final class HalfSpaceKernel1D {
     /** m·norm·exp(−μt/R − (x − ξ − vt/R)²R/(4Dt) − e): the free-space kernel times m. */
     static double gaussTerm(Frame f, double x, double m, double eh, double el) {
         final Spread s = f.s;
+        if (eh == 0 && el == 0) {
+            final double dist = (x - f.ch) - f.cl;
+            final double q = dist * dist * s.high;
+            final double scaled = m * f.bulkScale;
+            final double size = Math.abs(scaled);
+            if (q < BULK_EXPONENT && size >= BULK_SCALE_MIN && size <= BULK_SCALE_MAX) {
+                return scaled * Math.exp(-q);
+            }
+        }
         final double qh = s.exponentHigh(x, f.ch, f.cl);
         final double ql = s.exponentLow(x, f.ch, f.cl, qh);
         final double h = qh + eh;
@@ -362,11 +386,11 @@ public final class HalfSpaceKernel1D {
 
     double value(Frame f, double x, double mult, double eh, double el) {
         final double kx = 4 * x * xi * f.s.high;
-        final double em = -Math.expm1(-kx);
+        final double e = Math.exp(-kx);
+        final double em = oneMinus(kx, e);
         if (wall == Wall.ABSORBING) {
             return gaussTerm(f, x, mult * em, eh, el);
         }
-        final double e = Math.exp(-kx);
         if (velocity >= 0) {
             final double b = argumentB(f, x);
             return gaussTerm(f, x, mult * (em + e * TWO_SQRT_PI * capitalPhi(f, x, b)), eh, el);
@@ -378,8 +402,8 @@ public final class HalfSpaceKernel1D {
     double gradient(Frame f, double x, double mult, double eh, double el) {
         final Spread s = f.s;
         final double kx = 4 * x * xi * s.high;
-        final double em = -Math.expm1(-kx);
         final double e = Math.exp(-kx);
+        final double em = oneMinus(kx, e);
         final double dist = (x - f.ch) - f.cl;
         if (wall == Wall.ABSORBING) {
             // G_x − I_x = 2G·R/(4Dt)·[−(x − ξ − vt/R)(1 − e) + 2ξe]
@@ -413,8 +437,8 @@ public final class HalfSpaceKernel1D {
     double flux(Frame f, double x, double mult, double eh, double el) {
         final Spread s = f.s;
         final double kx = 4 * x * xi * s.high;
-        final double em = -Math.expm1(-kx);
         final double e = Math.exp(-kx);
+        final double em = oneMinus(kx, e);
         final double drift = velocity / retardation * f.t;
         // Two equal forms of each bracket (times R/(2t)); the first for e < 1/2, where its
         // image part is the smaller one, the second for e ≥ 1/2, where 1 − e is formed by
@@ -433,6 +457,14 @@ public final class HalfSpaceKernel1D {
                 : x * (1 + e) + Math.fma(velocity / retardation, f.t, -xi) * em;
         }
         return gaussTerm(f, x, mult * 2 * dispersion * s.high * bracket, eh, el);
+    }
+
+    /** ln 2: above it 1 − e^{−k} loses nothing (e^{−k} &lt; 1/2), below expm1 is needed. */
+    private static final double LN2 = 0.6931471805599453;
+
+    /** 1 − e^{−k} given e = e^{−k}: the plain difference where it cannot cancel. */
+    static double oneMinus(double k, double e) {
+        return k > LN2 ? 1 - e : -Math.expm1(-k);
     }
 
     private static double checkX(double x) {

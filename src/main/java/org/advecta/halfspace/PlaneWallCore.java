@@ -201,7 +201,7 @@ final class PlaneWallCore {
         final double w0 = onY ? y0 : z0;
         final double kw = 4 * w * w0 * sw.high;
         final double e = Math.exp(-kw);
-        final double em = -Math.expm1(-kw);
+        final double em = HalfSpaceKernel1D.oneMinus(kw, e);
         final double twoDist = 2 * (w - w0) * sw.high;
         final double bracket;
         if ((onY && q == Quantity.GRADIENT_Y) || (!onY && q == Quantity.GRADIENT_Z)) {
