@@ -92,14 +92,17 @@ final class Families {
                 ParamSpec.number("z0", "release point in the third direction [L]").byDefault(0),
                 ParamSpec.number("M", "amount released per unit mobile-phase capacity, "
                     + "e.g. mass/porosity [C L^3]").byDefault(1)),
-            Families::release3d)), PlumeFamilies.all());
+            Families::release3d)), PlumeFamilies.all(), HalfSpaceFamilies.all());
 
     private Families() {
     }
 
-    private static List<Family> concat(List<Family> first, List<Family> second) {
-        final List<Family> all = new ArrayList<>(first);
-        all.addAll(second);
+    @SafeVarargs
+    private static List<Family> concat(List<Family>... parts) {
+        final List<Family> all = new ArrayList<>();
+        for (List<Family> part : parts) {
+            all.addAll(part);
+        }
         return List.copyOf(all);
     }
 
@@ -194,16 +197,28 @@ final class Families {
     }
 
     /** The amount C·exp(−μt/R) of a released or initial amount that only decays. */
-    private static Budget decaying(Params p, double amount) {
+    static Budget decaying(Params p, double amount) {
         final double rate = p.get("mu") / p.get("R");
         return t -> OptionalDouble.of(amount * Math.exp(-rate * t));
     }
 
     /** A closed-form amount in solution, per family. */
     @FunctionalInterface
-    private interface Budget {
+    interface Budget {
+        /**
+         * Returns the amount in solution at time t.
+         *
+         * @param t time
+         * @return the amount, or empty if it has no finite closed form
+         */
         OptionalDouble mass(double t);
 
+        /**
+         * Returns the far-field level at time t.
+         *
+         * @param t time
+         * @return the level (0 unless overridden)
+         */
         default double background(double t) {
             return 0.0;
         }
@@ -272,7 +287,14 @@ final class Families {
         }
     }
 
-    private static Field line(Solution1D s, Budget budget) {
+    /**
+     * Wraps a one-dimensional solution as a field.
+     *
+     * @param s the solution
+     * @param budget its closed-form amount in solution, or null for none
+     * @return the field
+     */
+    static Field line(Solution1D s, Budget budget) {
         return new LineField(s, budget);
     }
 

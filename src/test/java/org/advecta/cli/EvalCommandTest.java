@@ -147,7 +147,7 @@ class EvalCommandTest {
                 k3.fluxZ(x, y, z, t)},
                 "v=0.4", "D=0.2", "DT=0.02", "DV=0.004", "R=2", "mu=1e-3", "x0=0.5", "y0=0.25",
                 "z0=-0.5")),
-            PlumeCases.cases());
+            Stream.concat(PlumeCases.cases(), HalfSpaceCases.cases()));
     }
 
     @Test
