@@ -123,7 +123,13 @@ final class Families {
             + String.join(", ", ALL.stream().map(Family::name).toArray(String[]::new)) + ")");
     }
 
-    /** v, D, R, mu, and D_T (2D, 3D) and D_V (3D). */
+    /**
+     * The medium's specs: v, D, R, mu, and D_T (2D, 3D) and D_V (3D).
+     *
+     * @param positiveVelocity whether v must be &gt; 0
+     * @param dimensions 1, 2 or 3
+     * @return the specs, in listing order
+     */
     static List<ParamSpec> transport(boolean positiveVelocity, int dimensions) {
         final ParamSpec v = ParamSpec.number("v", positiveVelocity
             ? "velocity along x, into the domain [L/T]" : "velocity along x [L/T]");
@@ -157,7 +163,13 @@ final class Families {
             ParamSpec.number("Ci", "initial concentration in the domain [C]").byDefault(0)};
     }
 
-    /** The common specs followed by the family's own. */
+    /**
+     * The common specs followed by the family's own.
+     *
+     * @param common the medium's specs
+     * @param own the family's own
+     * @return all of them, in listing order
+     */
     static List<ParamSpec> specs(List<ParamSpec> common, ParamSpec... own) {
         final List<ParamSpec> all = new ArrayList<>(common);
         all.addAll(List.of(own));
@@ -196,7 +208,13 @@ final class Families {
         }
     }
 
-    /** The amount C·exp(−μt/R) of a released or initial amount that only decays. */
+    /**
+     * The amount C·exp(−μt/R) of a released or initial amount that only decays.
+     *
+     * @param p the family's parameters (mu and R are read)
+     * @param amount the amount C at t = 0
+     * @return the budget
+     */
     static Budget decaying(Params p, double amount) {
         final double rate = p.get("mu") / p.get("R");
         return t -> OptionalDouble.of(amount * Math.exp(-rate * t));
