@@ -32,6 +32,8 @@ module org.advecta {
     exports org.advecta.transport;
     exports org.advecta.kernel;
     exports org.advecta.solution;
+    exports org.advecta.quadrature;
+    exports org.advecta.plume;
     exports org.advecta.convolution;
     exports org.advecta.verify;
     exports org.advecta.moments;

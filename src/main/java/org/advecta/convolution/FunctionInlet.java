@@ -3,6 +3,7 @@ package org.advecta.convolution;
 import java.util.Arrays;
 import java.util.function.DoubleUnaryOperator;
 import org.advecta.internal.Checks;
+import org.advecta.quadrature.Estimate;
 import org.advecta.special.ErrorFunctions;
 import org.advecta.special.Exponentials;
 import org.advecta.transport.TransportParameters;

@@ -5,6 +5,7 @@ import java.util.Locale;
 import java.util.function.DoubleUnaryOperator;
 import org.advecta.internal.Checks;
 import org.advecta.kernel.FreeSpaceKernel1D;
+import org.advecta.quadrature.Estimate;
 import org.advecta.transport.TransportParameters;
 
 /**

@@ -2,6 +2,7 @@ package org.advecta.convolution;
 
 import java.util.Locale;
 import org.advecta.internal.Checks;
+import org.advecta.quadrature.Estimate;
 import org.advecta.solution.Domain;
 import org.advecta.solution.FirstTypeInlet;
 import org.advecta.solution.InletInput;

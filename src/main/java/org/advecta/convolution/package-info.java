@@ -6,7 +6,7 @@
  * <ol>
  *   <li>{@link org.advecta.convolution.FunctionConvolution}: φ(ξ) as a function, with
  *       optional support and breakpoints; adaptive Gauss–Kronrod quadrature around the
- *       moving centre, returning an {@link org.advecta.convolution.Estimate} (value and
+ *       moving centre, returning an {@link org.advecta.quadrature.Estimate} (value and
  *       error estimate);</li>
  *   <li>{@link org.advecta.convolution.ProfileConvolution} of a
  *       {@link org.advecta.convolution.PiecewiseLinearProfile}: samples on any grid (or cell

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.function.DoubleUnaryOperator;
+import org.advecta.quadrature.Estimate;
 import org.advecta.solution.InitialGaussian;
 import org.advecta.solution.InitialSlug;
 import org.advecta.solution.InitialStep;

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
+import org.advecta.quadrature.Estimate;
 import org.advecta.solution.FirstTypeInlet;
 import org.advecta.solution.InletInput;
 import org.advecta.solution.Solution1D;

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.advecta.kernel.FreeSpaceKernel1D;
+import org.advecta.quadrature.Estimate;
 import org.advecta.testing.Integrals;
 import org.advecta.transport.TransportParameters;
 import org.junit.jupiter.api.Test;
