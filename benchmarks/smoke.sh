@@ -11,4 +11,12 @@ if [ "${ADVECTA_SKIP_INSTALL:-0}" != 1 ]; then
   mvn -B -q install -DskipTests
 fi
 mvn -B -q -f benchmarks/pom.xml package
-java -jar benchmarks/target/benchmarks.jar -foe true -f 1 -wi 1 -i 1 -w 200ms -r 200ms "$@"
+SMOKE="-foe true -f 1 -wi 1 -i 1 -w 200ms -r 200ms"
+if [ $# -gt 0 ]; then
+  java -jar benchmarks/target/benchmarks.jar $SMOKE "$@"
+else
+  # ConvolutionPerformance's direct sum takes minutes per call at its larger sizes: smoke it
+  # at its smallest size only
+  java -jar benchmarks/target/benchmarks.jar $SMOKE -e ConvolutionPerformance
+  java -jar benchmarks/target/benchmarks.jar $SMOKE -p size=1000 ConvolutionPerformance
+fi

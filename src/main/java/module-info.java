@@ -32,6 +32,7 @@ module org.advecta {
     exports org.advecta.transport;
     exports org.advecta.kernel;
     exports org.advecta.solution;
+    exports org.advecta.halfspace;
     exports org.advecta.quadrature;
     exports org.advecta.plume;
     exports org.advecta.convolution;
