@@ -1,5 +1,6 @@
 package org.advecta.convolution;
 
+import org.advecta.halfspace.Wall;
 import org.advecta.internal.Checks;
 import org.advecta.solution.Domain;
 import org.advecta.special.ErrorFunctions;
@@ -24,8 +25,10 @@ import org.advecta.transport.TransportParameters;
  * zero-flux wall becomes the radiation condition w′ = (v/(2D))·w, whose Green's function is
  * g(x − ξ) + g(x + ξ) − 2h∫₀^∞ e^{−hη}g(x + ξ + η) dη, h = v/(2D) (Carslaw &amp; Jaeger 1959,
  * §14.2). The identity I/G₀ = exp(−4xξ/L²) keeps the image free of overflow. The same
- * Green's function is the one of the half-space solutions (the wall package); here it comes
- * with its integrals over segments.
+ * Green's function is that of {@link org.advecta.halfspace.HalfSpaceKernel1D} (the tests check
+ * the two against each other, and the segment integrals against
+ * {@link org.advecta.halfspace.HalfLineSlug} and {@link org.advecta.halfspace.HalfLineStep});
+ * here it comes with its integrals over segments, evaluated without allocation.
  *
  * <p><b>Segment integrals.</b> For φ linear on [a, b] ⊂ [0, ∞): the free part as
  * {@link InfiniteLineKernel}; the image is a Gaussian in ξ centred at −x − vt/R, so its hat
@@ -68,42 +71,32 @@ public final class HalfLineKernel implements ConvolutionKernel {
     }
 
     /**
-     * Returns the kernel of the half-line with an absorbing wall (c = 0 at x = 0).
+     * Returns the kernel of the half-line x ≥ 0 with the given wall at x = 0:
+     * {@link Wall#ABSORBING} (c = 0) or {@link Wall#ZERO_FLUX} (v c − D ∂c/∂x = 0; with μ = 0
+     * mass is conserved).
      *
-     * @param parameters v, D, R, μ
+     * @param parameters v (either sign), D, R, μ
+     * @param wall the wall condition
      * @return the kernel
-     * @throws IllegalArgumentException if parameters is null
+     * @throws IllegalArgumentException if an argument is null
      */
-    public static HalfLineKernel absorbing(TransportParameters parameters) {
-        return new HalfLineKernel(check(parameters), false);
-    }
-
-    /**
-     * Returns the kernel of the half-line with a zero-flux wall (v c − D ∂c/∂x = 0 at x = 0;
-     * with μ = 0 mass is conserved).
-     *
-     * @param parameters v, D, R, μ
-     * @return the kernel
-     * @throws IllegalArgumentException if parameters is null
-     */
-    public static HalfLineKernel zeroFlux(TransportParameters parameters) {
-        return new HalfLineKernel(check(parameters), true);
-    }
-
-    private static TransportParameters check(TransportParameters parameters) {
+    public static HalfLineKernel of(TransportParameters parameters, Wall wall) {
         if (parameters == null) {
             throw new IllegalArgumentException("parameters: must not be null");
         }
-        return parameters;
+        if (wall == null) {
+            throw new IllegalArgumentException("wall: must not be null");
+        }
+        return new HalfLineKernel(parameters, wall == Wall.ZERO_FLUX);
     }
 
     /**
-     * Returns whether the wall is zero-flux (false: absorbing).
+     * Returns the wall condition.
      *
-     * @return true for the zero-flux wall
+     * @return the wall
      */
-    public boolean isZeroFlux() {
-        return zeroFlux;
+    public Wall wall() {
+        return zeroFlux ? Wall.ZERO_FLUX : Wall.ABSORBING;
     }
 
     @Override

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
+import org.advecta.halfspace.Wall;
 import org.advecta.quadrature.Estimate;
 import org.advecta.testing.FixtureAudit;
 import org.advecta.testing.ReferenceTable;
@@ -29,8 +30,8 @@ class HalfLineConvolutionTest {
     }
 
     private static ConvolutionKernel kernel(ReferenceTable.Row r) {
-        return r.get("wall").equals("absorbing") ? HalfLineKernel.absorbing(params(r))
-            : HalfLineKernel.zeroFlux(params(r));
+        return r.get("wall").equals("absorbing") ? HalfLineKernel.of(params(r), Wall.ABSORBING)
+            : HalfLineKernel.of(params(r), Wall.ZERO_FLUX);
     }
 
     private static PiecewiseLinearProfile profile(String name) {

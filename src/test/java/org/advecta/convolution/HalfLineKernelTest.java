@@ -4,6 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import org.advecta.halfspace.HalfLineSlug;
+import org.advecta.halfspace.HalfLineStep;
+import org.advecta.halfspace.HalfSpaceKernel1D;
+import org.advecta.halfspace.Wall;
 import org.advecta.solution.Domain;
 import org.advecta.transport.TransportParameters;
 import org.junit.jupiter.api.Test;
@@ -33,7 +37,8 @@ class HalfLineKernelTest {
     };
 
     private static ConvolutionKernel[] kernels(TransportParameters p) {
-        return new ConvolutionKernel[] {HalfLineKernel.absorbing(p), HalfLineKernel.zeroFlux(p)};
+        return new ConvolutionKernel[] {HalfLineKernel.of(p, Wall.ABSORBING),
+            HalfLineKernel.of(p, Wall.ZERO_FLUX)};
     }
 
     /** The panel width of the reference quadrature near the centres (set per kernel). */
@@ -207,12 +212,72 @@ class HalfLineKernelTest {
         }
     }
 
+    /**
+     * The half-space package's closed forms (org.advecta.halfspace, within max(16, 2κ) ULP by
+     * their own fixtures): the point values and gradients equal HalfSpaceKernel1D, a box
+     * (constant data on [a, b]) equals HalfLineSlug, the tail above a equals HalfLineStep.
+     */
+    @Test
+    void agreesWithTheHalfSpaceClosedForms() {
+        double worst = 0;
+        for (TransportParameters p : PARAMS) {
+            for (Wall wall : Wall.values()) {
+                final ConvolutionKernel k = HalfLineKernel.of(p, wall);
+                for (double t : TIMES) {
+                    final ConvolutionKernel.Snapshot s = k.at(t);
+                    final ConvolutionKernel.Snapshot free = InfiniteLineKernel.of(p).at(t);
+                    final double l = Math.sqrt(4 * p.dispersion() * t / p.retardation());
+                    final double d = p.velocity() * t / p.retardation();
+                    for (double x : XS) {
+                        // (HalfSpaceKernel1D takes sources ξ > 0)
+                        for (double xi : new double[] {1e-3, 0.05, 0.3, 1.0, 2.5}) {
+                            final HalfSpaceKernel1D g = HalfSpaceKernel1D.of(p, wall, xi);
+                            final double scale = Math.abs(free.value(x, xi))
+                                + Math.abs(g.value(x, t)) + 1e-300;
+                            final double tol = tolerance(x, d, l, xi, xi);
+                            worst = Math.max(worst, Math.abs(g.value(x, t) - s.value(x, xi))
+                                / (tol * scale));
+                            assertEquals(g.value(x, t), s.value(x, xi), tol * scale,
+                                wall + " " + p + " t " + t + " x " + x + " xi " + xi);
+                            final double gs = Math.abs(free.gradient(x, xi))
+                                + Math.abs(g.gradient(x, t)) + scale / l;
+                            assertEquals(g.gradient(x, t), s.gradient(x, xi), tol * gs,
+                                wall + " " + p + " t " + t + " x " + x + " xi " + xi
+                                + " gradient");
+                        }
+                        for (double[] seg : SEGMENTS) {
+                            final double a = seg[0];
+                            final double b = seg[1];
+                            final double box = HalfLineSlug.of(p, wall, a, b, 1.5).value(x, t);
+                            final double mine = s.linear(x, a, b, 1.5, 1.5);
+                            final double scale = free.linear(x, a, b, 1.5, 1.5) + Math.abs(box)
+                                + 1e-300;
+                            final double tol = tolerance(x, d, l, a, b);
+                            worst = Math.max(worst, Math.abs(box - mine) / (tol * scale));
+                            assertEquals(box, mine, tol * scale, wall + " " + p + " t " + t
+                                + " x " + x + " box [" + a + ", " + b + "]");
+                            final double step = HalfLineStep.of(p, wall, a, 1.0).value(x, t);
+                            final double tail = s.above(x, a);
+                            final double tScale = free.above(x, a) + Math.abs(step) + 1e-300;
+                            final double tTol = tolerance(x, d, l, a, a + 40 * l);
+                            worst = Math.max(worst, Math.abs(step - tail) / (tTol * tScale));
+                            assertEquals(step, tail, tTol * tScale, wall + " " + p + " t " + t
+                                + " x " + x + " step at " + a);
+                        }
+                    }
+                }
+            }
+        }
+        System.out.printf("half-line kernel vs org.advecta.halfspace: worst %.3g of the "
+            + "tolerance%n", worst);
+    }
+
     @Test
     void wallConditionsHoldPointwise() {
         for (TransportParameters p : PARAMS) {
             for (double t : TIMES) {
-                final ConvolutionKernel.Snapshot abs = HalfLineKernel.absorbing(p).at(t);
-                final ConvolutionKernel.Snapshot zf = HalfLineKernel.zeroFlux(p).at(t);
+                final ConvolutionKernel.Snapshot abs = HalfLineKernel.of(p, Wall.ABSORBING).at(t);
+                final ConvolutionKernel.Snapshot zf = HalfLineKernel.of(p, Wall.ZERO_FLUX).at(t);
                 for (double xi : new double[] {0.0, 0.05, 0.3, 1.0}) {
                     assertEquals(0.0, abs.value(0, xi), 0.0);
                     // v·G − D·∂G/∂x = 0 at x = 0 (relative to the size of each term)
@@ -231,14 +296,17 @@ class HalfLineKernelTest {
     @Test
     void describesItself() {
         final TransportParameters p = TransportParameters.of(1, 1);
-        assertEquals(Domain.HALF_LINE, HalfLineKernel.absorbing(p).domain());
-        assertTrue(HalfLineKernel.zeroFlux(p).isZeroFlux());
-        assertTrue(!HalfLineKernel.absorbing(p).isZeroFlux());
-        assertEquals(p, HalfLineKernel.zeroFlux(p).parameters());
-        assertTrue(!HalfLineKernel.zeroFlux(p).at(1).translationInvariant());
-        assertThrows(IllegalArgumentException.class, () -> HalfLineKernel.absorbing(null));
-        assertThrows(IllegalArgumentException.class, () -> HalfLineKernel.zeroFlux(p).at(-1));
-        assertThrows(IllegalArgumentException.class, () -> HalfLineKernel.zeroFlux(p)
+        assertEquals(Domain.HALF_LINE, HalfLineKernel.of(p, Wall.ABSORBING).domain());
+        assertEquals(Wall.ZERO_FLUX, HalfLineKernel.of(p, Wall.ZERO_FLUX).wall());
+        assertEquals(Wall.ABSORBING, HalfLineKernel.of(p, Wall.ABSORBING).wall());
+        assertEquals(p, HalfLineKernel.of(p, Wall.ZERO_FLUX).parameters());
+        assertTrue(!HalfLineKernel.of(p, Wall.ZERO_FLUX).at(1).translationInvariant());
+        assertThrows(IllegalArgumentException.class,
+            () -> HalfLineKernel.of(null, Wall.ABSORBING));
+        assertThrows(IllegalArgumentException.class, () -> HalfLineKernel.of(p, null));
+        assertThrows(IllegalArgumentException.class,
+            () -> HalfLineKernel.of(p, Wall.ZERO_FLUX).at(-1));
+        assertThrows(IllegalArgumentException.class, () -> HalfLineKernel.of(p, Wall.ZERO_FLUX)
             .at(Double.NaN));
     }
 }

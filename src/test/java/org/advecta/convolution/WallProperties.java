@@ -8,6 +8,7 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.LongRange;
+import org.advecta.halfspace.Wall;
 import org.advecta.internal.GaussLegendre;
 import org.advecta.transport.TransportParameters;
 
@@ -85,7 +86,7 @@ class WallProperties {
                                    @ForAll @DoubleRange(min = 0.05, max = 2) double t) {
         final TransportParameters p = params(v, logD, r, 0.0);
         final PiecewiseLinearProfile f = profile(seed);
-        final ProfileConvolution c = ProfileConvolution.of(HalfLineKernel.zeroFlux(p), f);
+        final ProfileConvolution c = ProfileConvolution.of(HalfLineKernel.of(p, Wall.ZERO_FLUX), f);
         final double l = Math.sqrt(4 * p.dispersion() * t / r);
         final double far = f.nodes()[f.size() - 1] + Math.max(0, v * t / r) + 14 * l;
         final double mass = initialMass(f);
@@ -100,7 +101,7 @@ class WallProperties {
                                 @ForAll @DoubleRange(min = 0.05, max = 2) double t) {
         final TransportParameters p = params(v, logD, 1.0, 0.0);
         final PiecewiseLinearProfile f = profile(seed);
-        final ProfileConvolution c = ProfileConvolution.of(HalfLineKernel.absorbing(p), f);
+        final ProfileConvolution c = ProfileConvolution.of(HalfLineKernel.of(p, Wall.ABSORBING), f);
         final double l = Math.sqrt(4 * p.dispersion() * t);
         final double far = f.nodes()[f.size() - 1] + Math.max(0, v * t) + 14 * l;
         final double mass = initialMass(f);
@@ -124,10 +125,10 @@ class WallProperties {
             max = Math.max(max, a);
         }
         // c = 0 on an absorbing wall, to rounding of the free part (≤ max|f|·decay)
-        final ProfileConvolution a = ProfileConvolution.of(HalfLineKernel.absorbing(p), f);
+        final ProfileConvolution a = ProfileConvolution.of(HalfLineKernel.of(p, Wall.ABSORBING), f);
         assertEquals(0.0, a.value(0, t), 1e-13 * max, "absorbing wall value");
         // v·c − D·∂c/∂x = 0 on a zero-flux wall, relative to the two terms' sizes
-        final ProfileConvolution z = ProfileConvolution.of(HalfLineKernel.zeroFlux(p), f);
+        final ProfileConvolution z = ProfileConvolution.of(HalfLineKernel.of(p, Wall.ZERO_FLUX), f);
         final double c0 = z.value(0, t);
         final double g0 = z.gradient(0, t);
         final double dd = p.dispersion();
