@@ -219,6 +219,10 @@ class FunctionConvolutionTest {
         assertThrows(IllegalArgumentException.class, () -> f.withBreakpoints(0).withSmoothData());
         assertThrows(IllegalArgumentException.class, () -> f.withSmoothData().withSupport(0, 1));
         assertThrows(IllegalArgumentException.class, () -> f.withSmoothData().withBreakpoints(0));
+        // Gauss–Hermite is for the infinite line: the half-line kernels take the adaptive path
+        assertThrows(IllegalArgumentException.class, () -> FunctionConvolution.of(
+            HalfLineKernel.of(p, org.advecta.halfspace.Wall.ZERO_FLUX), Math::cos)
+            .withSmoothData());
         final FunctionConvolution nan = FunctionConvolution.of(p, xi -> xi > 0.3 ? Double.NaN
             : 1).withSmoothData();
         assertThrows(IllegalArgumentException.class, () -> nan.value(0, 1));

@@ -139,4 +139,23 @@ class WallProperties {
         assertEquals(0.0, v * c0 - dd * g0, tol, "zero-flux wall: v c = " + v * c0
             + ", D c_x = " + dd * g0);
     }
+
+    @Property(tries = 300)
+    void nonNegativeDataStayNonNegative(@ForAll @LongRange(min = 1, max = 1_000_000) long seed,
+                                        @ForAll @DoubleRange(min = -30, max = 30) double v,
+                                        @ForAll @DoubleRange(min = -4, max = 1) double logD,
+                                        @ForAll @DoubleRange(min = 0, max = 1) double mu,
+                                        @ForAll @DoubleRange(min = 0, max = 3) double x,
+                                        @ForAll @DoubleRange(min = 0.01, max = 3) double t) {
+        final TransportParameters p = params(v, logD, 1.5, mu);
+        final PiecewiseLinearProfile f = profile(seed);
+        // a Green's function is non-negative; the wall terms may cancel against the free
+        // part near the wall, so the allowance is rounding of the free part
+        final double freePart = ProfileConvolution.of(p, f).value(x, t);
+        for (Wall wall : Wall.values()) {
+            final double c = ProfileConvolution.of(HalfLineKernel.of(p, wall), f).value(x, t);
+            assertTrue(c >= -1e-13 * freePart - 1e-300, wall + ": " + c + " (free part "
+                + freePart + ")");
+        }
+    }
 }
