@@ -4,10 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import org.advecta.quadrature.Estimate;
 import org.advecta.convolution.FunctionConvolution;
 import org.advecta.convolution.GridMethod;
 import org.advecta.convolution.HalfLineKernel;
@@ -16,9 +12,11 @@ import org.advecta.convolution.PiecewiseLinearProfile;
 import org.advecta.convolution.ProfileConvolution;
 import org.advecta.convolution.TabulatedInlet;
 import org.advecta.halfspace.Wall;
+import org.advecta.quadrature.Estimate;
 import org.advecta.solution.FirstTypeInlet;
 import org.advecta.solution.InletInput;
 import org.advecta.solution.Solution1D;
+import org.advecta.testing.ReadmeSnippet;
 import org.advecta.transport.TransportParameters;
 import org.junit.jupiter.api.Test;
 
@@ -76,21 +74,6 @@ class ReadmeConvolutionExampleTest {
         // the smooth route and the adaptive route agree within their estimates
         assertEquals(e.value(), smooth.value(), e.error() + smooth.error());
         assertTrue(cw > 0 && fw.value() > 0, cw + " " + fw);
-        final String readme = Files.readString(Path.of("README.md"), StandardCharsets.UTF_8);
-        final String source = Files.readString(
-            Path.of("src/test/java/org/advecta/example/ReadmeConvolutionExampleTest.java"),
-            StandardCharsets.UTF_8);
-        final String block = source.substring(source.indexOf("// --- README's example"),
-            source.indexOf("// --- end of the example"));
-        int checked = 0;
-        for (String line : block.split("\n")) {
-            final String code = line.trim();
-            if (code.isEmpty() || code.startsWith("// ---")) {
-                continue;
-            }
-            checked++;
-            assertTrue(readme.contains(code), "README no longer shows: " + code);
-        }
-        assertTrue(checked >= 20, "only " + checked + " lines checked");
+        ReadmeSnippet.assertShownInReadme("src/test/java/org/advecta/example/ReadmeConvolutionExampleTest.java", 20);
     }
 }
