@@ -9,8 +9,9 @@ import org.advecta.transport.TransportParameters;
  * data φ is c(x, t) = ∫ φ(ξ)·G(x, ξ, t) dξ over the domain.
  *
  * <p>This is the extension point of the convolution routes: {@link InfiniteLineKernel} is
- * the free-space kernel of the whole line; a half-line with a wall supplies its own kernel
- * (free-space kernel plus images) with the same segment integrals, and every route of
+ * the free-space kernel of the whole line; {@link HalfLineKernel} (absorbing or zero-flux
+ * wall at x = 0) is the free-space kernel plus images with the same segment integrals, and
+ * every route of
  * {@link ProfileConvolution} and {@link FunctionConvolution} then works on it unchanged
  * (the fast uniform-grid path needs translation invariance and stays on the line).
  *

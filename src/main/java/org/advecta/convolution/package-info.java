@@ -7,7 +7,9 @@
  *   <li>{@link org.advecta.convolution.FunctionConvolution}: φ(ξ) as a function, with
  *       optional support and breakpoints; adaptive Gauss–Kronrod quadrature around the
  *       moving centre, returning an {@link org.advecta.quadrature.Estimate} (value and
- *       error estimate);</li>
+ *       error estimate); for data declared smooth
+ *       ({@link org.advecta.convolution.FunctionConvolution#withSmoothData()}) Gauss–Hermite
+ *       rules of doubling order first;</li>
  *   <li>{@link org.advecta.convolution.ProfileConvolution} of a
  *       {@link org.advecta.convolution.PiecewiseLinearProfile}: samples on any grid (or cell
  *       averages), each segment integrated in closed form, exact for the interpolant;</li>
@@ -20,8 +22,9 @@
  * {@link org.advecta.convolution.FunctionInlet} (g(t) as a function, by quadrature of the
  * impulse response, with an error estimate).
  *
- * <p>The kernel is pluggable ({@link org.advecta.convolution.ConvolutionKernel}): a
- * half-line with a wall supplies its Green's function and segment integrals, and routes 1
- * and 2 work on it unchanged.
+ * <p>The kernel is pluggable ({@link org.advecta.convolution.ConvolutionKernel}):
+ * {@link org.advecta.convolution.HalfLineKernel} is the half-line x ≥ 0 with an absorbing or
+ * zero-flux wall at x = 0 (free kernel plus images, closed-form segment integrals), and
+ * routes 1 and 2 work on it unchanged; route 3 (the uniform grid) is line only.
  */
 package org.advecta.convolution;

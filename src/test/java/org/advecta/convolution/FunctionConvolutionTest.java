@@ -104,6 +104,130 @@ class FunctionConvolutionTest {
         assertTrue(compared >= 20, "too few rows exercise the estimate: " + compared);
     }
 
+    /** The smooth (sech) rows through Gauss–Hermite, counting the calls of φ. */
+    private static double[] smoothRun(double tol, boolean ratios) {
+        final ReferenceTable table = ReferenceTable.load(DIR + "function_convolution.csv");
+        int rows = 0;
+        int compared = 0;
+        int hermite = 0;
+        long maxCalls = 0;
+        long totalCalls = 0;
+        double worstRatio = 0;
+        double bestRatio = Double.POSITIVE_INFINITY;
+        double worstRel = 0;
+        for (ReferenceTable.Row r : table.rows()) {
+            if (!r.get("function").equals("sech")) {
+                continue;
+            }
+            rows++;
+            final long[] calls = {0};
+            FunctionConvolution f = FunctionConvolution.of(params(r), xi -> {
+                calls[0]++;
+                return 1 / Math.cosh(xi);
+            }).withSmoothData();
+            if (tol > 0) {
+                f = f.withTolerance(1e-300, tol);
+            }
+            final Estimate e = f.value(r.getDouble("x"), r.getDouble("t"));
+            final BigDecimal exact = r.value();
+            final double err = Math.abs(new BigDecimal(e.value()).subtract(exact,
+                MathContext.DECIMAL128).doubleValue());
+            assertTrue(err <= e.error() + Double.MIN_VALUE, () -> r.line() + " tol " + tol
+                + " got " + e + " error " + err);
+            worstRel = Math.max(worstRel, err / Math.abs(exact.doubleValue()));
+            // at most 310 calls: Gauss–Hermite met the tolerance (no adaptive fallback)
+            if (calls[0] <= 310) {
+                hermite++;
+            }
+            maxCalls = Math.max(maxCalls, calls[0]);
+            totalCalls += calls[0];
+            if (ratios && err > 1e-13 * Math.abs(exact.doubleValue()) && err > 1e-300) {
+                compared++;
+                final double ratio = e.error() / err;
+                worstRatio = Math.max(worstRatio, ratio);
+                bestRatio = Math.min(bestRatio, ratio);
+                assertTrue(ratio <= 100, () -> r.line() + " estimate " + e.error()
+                    + " vs error " + err);
+            }
+        }
+        System.out.printf("Gauss-Hermite, tolerance %s: %d sech rows, %d by Gauss-Hermite, "
+            + "phi calls mean %.1f max %d; worst relative error %.3g; %d rows with truncation "
+            + "error, estimate/error in [%.3g, %.3g]%n", tol > 0 ? tol : "default", rows, hermite,
+            (double) totalCalls / rows, maxCalls, worstRel, compared, bestRatio, worstRatio);
+        return new double[] {rows, hermite, compared, worstRel};
+    }
+
+    @Test
+    void smoothDataByGaussHermiteMeetTheFixtureWithinTheEstimate() {
+        final double[] run = smoothRun(0, false);
+        assertTrue(run[0] >= 30, "sech rows: " + run[0]);
+        // the default tolerance is 1e-12 relative
+        assertTrue(run[3] < 1e-11, "worst relative error " + run[3]);
+        // Gauss–Hermite (not the fallback) serves most smooth rows
+        assertTrue(run[1] >= 0.75 * run[0], "rows by Gauss-Hermite: " + run[1]);
+    }
+
+    @Test
+    void smoothDataEstimateIsWithinAHundredTimesTheActualError() {
+        int compared = 0;
+        for (double tol : new double[] {1e-4, 1e-6, 1e-9}) {
+            compared += (int) smoothRun(tol, true)[2];
+        }
+        assertTrue(compared >= 20, "too few rows exercise the estimate: " + compared);
+    }
+
+    @Test
+    void smoothDataAgreeWithTheAdaptivePathAndTheGaussianClosedForm() {
+        final TransportParameters p = TransportParameters.of(-3.0, 2.0).withRetardation(2.5)
+            .withDecay(0.3);
+        final double s0 = 0.75;
+        final DoubleUnaryOperator gauss = xi -> 2.0 * Math.exp(-(xi - 0.5) * (xi - 0.5)
+            / (2 * s0 * s0)) / (s0 * Math.sqrt(2 * Math.PI));
+        final FunctionConvolution g = FunctionConvolution.of(p, gauss).withSmoothData();
+        final InitialGaussian ge = InitialGaussian.of(p, 0.5, s0, 2.0);
+        for (double t : new double[] {0.01, 0.4, 3.0}) {
+            final double drift = p.velocity() * t / p.retardation();
+            for (int i = -8; i <= 8; i++) {
+                final double x = drift + 0.5 + 0.25 * i;
+                assertClose(ge.value(x, t), g.value(x, t));
+            }
+        }
+        // far in the tail (value ≈ 1e-43 of the peak)
+        assertClose(ge.value(10, 0.4), g.value(10, 0.4));
+        // data far narrower than the kernel: the rules cannot meet the tolerance, the
+        // adaptive path takes over (more than 310 calls) and agrees with the plain route
+        final long[] calls = {0};
+        final DoubleUnaryOperator narrow = xi -> 1 / Math.cosh(xi / 0.02);
+        final FunctionConvolution counted = FunctionConvolution.of(p, xi -> {
+            calls[0]++;
+            return narrow.applyAsDouble(xi);
+        }).withSmoothData();
+        final Estimate viaFallback = counted.value(-0.3, 0.4);
+        final Estimate plain = FunctionConvolution.of(p, narrow).value(-0.3, 0.4);
+        assertTrue(calls[0] > 310, "calls " + calls[0]);
+        assertEquals(plain.value(), viaFallback.value(), 0.0);
+        assertTrue(plain.error() < 1e-12 * plain.value(), "estimate " + plain);
+    }
+
+    @Test
+    void smoothDataDeclarationIsValidated() {
+        final TransportParameters p = TransportParameters.of(1, 1);
+        final FunctionConvolution f = FunctionConvolution.of(p, Math::cos);
+        assertTrue(f.withSmoothData().smoothData());
+        assertTrue(!f.smoothData());
+        assertThrows(IllegalArgumentException.class, () -> f.withSupport(0, 1).withSmoothData());
+        assertThrows(IllegalArgumentException.class, () -> f.withBreakpoints(0).withSmoothData());
+        assertThrows(IllegalArgumentException.class, () -> f.withSmoothData().withSupport(0, 1));
+        assertThrows(IllegalArgumentException.class, () -> f.withSmoothData().withBreakpoints(0));
+        // Gauss–Hermite is for the infinite line: the half-line kernels take the adaptive path
+        assertThrows(IllegalArgumentException.class, () -> FunctionConvolution.of(
+            HalfLineKernel.of(p, org.advecta.halfspace.Wall.ZERO_FLUX), Math::cos)
+            .withSmoothData());
+        final FunctionConvolution nan = FunctionConvolution.of(p, xi -> xi > 0.3 ? Double.NaN
+            : 1).withSmoothData();
+        assertThrows(IllegalArgumentException.class, () -> nan.value(0, 1));
+    }
+
     @Test
     void gaussianStepAndBoxAsFunctionsMatchTheClosedForms() {
         final TransportParameters[] ps = {

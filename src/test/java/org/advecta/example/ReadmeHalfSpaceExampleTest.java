@@ -3,13 +3,11 @@ package org.advecta.example;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import org.advecta.halfspace.HalfSpaceKernel1D;
 import org.advecta.halfspace.HalfSpaceKernel3D;
 import org.advecta.halfspace.Wall;
 import org.advecta.halfspace.WallAxis;
+import org.advecta.testing.ReadmeSnippet;
 import org.advecta.transport.TransportParameters;
 import org.junit.jupiter.api.Test;
 
@@ -34,21 +32,6 @@ class ReadmeHalfSpaceExampleTest {
         final double kept = k.massInDomain(2.0) + out;
         assertTrue(kept <= 1 && kept >= 1 - 1e-3 * 2.0, Double.toString(kept));
         assertTrue(ground.value(0.1, 0.2, 0.4, 1.0) > 0);
-        final String readme = Files.readString(Path.of("README.md"), StandardCharsets.UTF_8);
-        final String source = Files.readString(
-            Path.of("src/test/java/org/advecta/example/ReadmeHalfSpaceExampleTest.java"),
-            StandardCharsets.UTF_8);
-        final String block = source.substring(source.indexOf("// --- README's example"),
-            source.indexOf("// --- end of the example"));
-        int checked = 0;
-        for (String line : block.split("\n")) {
-            final String code = line.trim();
-            if (code.isEmpty() || code.startsWith("// ---")) {
-                continue;
-            }
-            checked++;
-            assertTrue(readme.contains(code), "README no longer shows: " + code);
-        }
-        assertTrue(checked >= 5, "only " + checked + " lines checked");
+        ReadmeSnippet.assertShownInReadme("src/test/java/org/advecta/example/ReadmeHalfSpaceExampleTest.java", 5);
     }
 }

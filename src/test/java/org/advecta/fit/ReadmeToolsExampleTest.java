@@ -4,13 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import org.advecta.moments.Moments;
 import org.advecta.solution.InitialStep;
 import org.advecta.solution.InletInput;
 import org.advecta.solution.Solution1D;
+import org.advecta.testing.ReadmeSnippet;
 import org.advecta.transport.TransportParameters;
 import org.advecta.verify.CellAverages;
 import org.advecta.verify.GridConvergenceIndex;
@@ -55,22 +53,7 @@ class ReadmeToolsExampleTest {
         assertEquals(0.6, v, 1e-8);
         assertTrue(low <= v && v - low < 1e-10); // noise-free data: a very narrow interval
         assertEquals(1.0 / 0.6 + 0.25, m.mean(), 0.01);
-        final String readme = Files.readString(Path.of("README.md"), StandardCharsets.UTF_8);
-        final String source = Files.readString(
-            Path.of("src/test/java/org/advecta/fit/ReadmeToolsExampleTest.java"),
-            StandardCharsets.UTF_8);
-        final String block = source.substring(source.indexOf("// --- README's example"),
-            source.indexOf("// --- end of the example"));
-        int checked = 0;
-        for (String line : block.split("\n")) {
-            final String code = line.trim();
-            if (code.isEmpty() || code.startsWith("//")) {
-                continue;
-            }
-            checked++;
-            assertTrue(readme.contains(code), "README no longer shows: " + code);
-        }
-        assertTrue(checked >= 12, "only " + checked + " lines checked");
+        ReadmeSnippet.assertShownInReadme("src/test/java/org/advecta/fit/ReadmeToolsExampleTest.java", 12);
     }
 
     /** The column behind the example's data. */

@@ -3,10 +3,8 @@ package org.advecta.plume;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import org.advecta.quadrature.Estimate;
+import org.advecta.testing.ReadmeSnippet;
 import org.advecta.transport.TransportParameters;
 import org.junit.jupiter.api.Test;
 
@@ -33,21 +31,6 @@ class PlumeExampleTest {
         assertTrue(c > 0 && c < cs, c + " " + cs);
         assertTrue(e.value() > 0 && e.relativeError() < 1e-10, e.toString());
         assertTrue(cp > 0 && Double.isFinite(cp), Double.toString(cp));
-        final String readme = Files.readString(Path.of("README.md"), StandardCharsets.UTF_8);
-        final String source = Files.readString(
-            Path.of("src/test/java/org/advecta/plume/PlumeExampleTest.java"),
-            StandardCharsets.UTF_8);
-        final String block = source.substring(source.indexOf("// --- README's example"),
-            source.indexOf("// --- end of the example"));
-        int checked = 0;
-        for (String line : block.split("\n")) {
-            final String code = line.trim();
-            if (code.isEmpty() || code.startsWith("// ---")) {
-                continue;
-            }
-            checked++;
-            assertTrue(readme.contains(code), "README no longer shows: " + code);
-        }
-        assertTrue(checked >= 8, "only " + checked + " lines checked");
+        ReadmeSnippet.assertShownInReadme("src/test/java/org/advecta/plume/PlumeExampleTest.java", 8);
     }
 }
