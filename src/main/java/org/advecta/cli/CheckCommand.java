@@ -235,7 +235,11 @@ final class CheckCommand implements Callable<Integer> {
     }
 
     private static Comparison comparePoints(DataTable table, Field field, Family family) {
-        final List<String> coordinates = family.coordinates();
+        final List<String> coordinates = new ArrayList<>(family.coordinates());
+        if (field.steady()) {
+            // a steady state has no time: a t column, if any, is not read (as in eval)
+            coordinates.remove("t");
+        }
         final List<String> needed = new ArrayList<>(coordinates);
         needed.add("c");
         for (String axis : List.of("x", "y", "z")) {
@@ -251,7 +255,7 @@ final class CheckCommand implements Callable<Integer> {
         for (int a = 0; a < 3; a++) {
             col[a] = a < d ? table.required(axes[a], needed) : -1;
         }
-        col[3] = table.required("t", needed);
+        col[3] = field.steady() ? -1 : table.required("t", needed);
         final int ic = table.required("c", needed);
         final int n = rows(table);
         final double[][] p = new double[4][n];

@@ -17,6 +17,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.advecta.quadrature.Estimate;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
@@ -35,8 +36,10 @@ import picocli.CommandLine.Parameters;
         "The header names the coordinate columns among x, y, z, t (the family's own: "
             + "see 'advecta list'); other columns are passed through. Each row is written "
             + "back with the column c appended (then dcdx, dcdy, dcdz with --gradient and "
-            + "jx, jy, jz with --flux). Numbers are printed so that they read back to the "
-            + "identical double."},
+            + "jx, jy, jz with --flux; c_error, the quadrature error bound, with --error). "
+            + "Numbers are printed so that they read back to the identical double.",
+        "With steady=true (continuous sources) t is not a coordinate: the t column may be "
+            + "left out, and if present it is passed through unread."},
     footer = {"", "Example:",
         "  printf 'x,t\\n0.5,2\\n1.0,2\\n' | advecta eval inlet-third v=0.6 D=0.005 R=1.5"})
 final class EvalCommand implements Callable<Integer> {
@@ -72,6 +75,10 @@ final class EvalCommand implements Callable<Integer> {
     @Option(names = "--flux", description = "append the total-flux columns")
     private boolean flux;
 
+    @Option(names = "--error", description = "append c_error, the error bound of a value "
+        + "computed by quadrature (line-source-2d, patch-source-3d)")
+    private boolean error;
+
     /**
      * Creates the command.
      *
@@ -86,6 +93,16 @@ final class EvalCommand implements Callable<Integer> {
         final Family family = Families.find(familyName);
         final Params params = Params.of(family, assignments(assignments));
         final Field field = family.create(params);
+        if ((gradient || flux) && !field.hasDerivatives()) {
+            throw new UserError("family " + family.name() + " has values only: no "
+                + (gradient ? "--gradient" : "--flux") + " (a continuous source's gradient "
+                + "and flux are not available)");
+        }
+        if (error && !field.hasErrorBound()) {
+            throw new UserError("--error: family " + family.name()
+                + (field.steady() ? " with steady = true" : "") + " is computed in closed "
+                + "form, without a quadrature error bound (see 'advecta list')");
+        }
         final String source = "-".equals(input) ? "standard input" : input;
         if ("-".equals(output)) {
             final ByteArrayOutputStream buffer = new ByteArrayOutputStream();
@@ -171,6 +188,9 @@ final class EvalCommand implements Callable<Integer> {
         final List<String> out = new ArrayList<>(header);
         final int d = field.dimensions();
         out.add("c");
+        if (error) {
+            out.add("c_error");
+        }
         if (gradient) {
             for (int k = 0; k < d; k++) {
                 out.add("dcd" + AXES[k]);
@@ -209,7 +229,13 @@ final class EvalCommand implements Callable<Integer> {
                 final double y = coordinates[1];
                 final double z = coordinates[2];
                 final double t = coordinates[3];
-                row.add(Double.toString(field.value(x, y, z, t)));
+                if (error) {
+                    final Estimate e = field.estimate(x, y, z, t);
+                    row.add(Double.toString(e.value()));
+                    row.add(Double.toString(e.error()));
+                } else {
+                    row.add(Double.toString(field.value(x, y, z, t)));
+                }
                 if (gradient) {
                     field.gradient(x, y, z, t, vector);
                     addAll(row, vector, d);
@@ -235,7 +261,9 @@ final class EvalCommand implements Callable<Integer> {
 
     private static List<String> coordinates(Field field) {
         final List<String> names = new ArrayList<>(List.of(AXES).subList(0, field.dimensions()));
-        names.add("t");
+        if (!field.steady()) {
+            names.add("t");
+        }
         return names;
     }
 
@@ -246,6 +274,11 @@ final class EvalCommand implements Callable<Integer> {
         final int[] column = new int[4];
         final List<String> needed = coordinates(field);
         for (int k = 0; k < 4; k++) {
+            if (k == 3 && field.steady()) {
+                // a steady state has no time: a t column passes through unread
+                column[k] = -1;
+                continue;
+            }
             column[k] = header.indexOf(AXES[k]);
             if (column[k] >= 0 && header.lastIndexOf(AXES[k]) != column[k]) {
                 throw new UserError(source + ": column " + AXES[k] + " appears twice");

@@ -32,7 +32,7 @@ final class Families {
     private static final String HALF_LINE = "half-line x >= 0 (inlet at x = 0)";
 
     /** Every family, in listing order. */
-    static final List<Family> ALL = List.of(
+    static final List<Family> ALL = concat(List.of(
         new Family("step", "a step of concentration C0 on one side of x0 at t = 0",
             LINE, 1, specs(transport(false, 1),
                 ParamSpec.number("x0", "position of the step [L]").byDefault(0),
@@ -92,9 +92,18 @@ final class Families {
                 ParamSpec.number("z0", "release point in the third direction [L]").byDefault(0),
                 ParamSpec.number("M", "amount released per unit mobile-phase capacity, "
                     + "e.g. mass/porosity [C L^3]").byDefault(1)),
-            Families::release3d));
+            Families::release3d)), PlumeFamilies.all(), HalfSpaceFamilies.all());
 
     private Families() {
+    }
+
+    @SafeVarargs
+    private static List<Family> concat(List<Family>... parts) {
+        final List<Family> all = new ArrayList<>();
+        for (List<Family> part : parts) {
+            all.addAll(part);
+        }
+        return List.copyOf(all);
     }
 
     /**
@@ -114,8 +123,14 @@ final class Families {
             + String.join(", ", ALL.stream().map(Family::name).toArray(String[]::new)) + ")");
     }
 
-    /** v, D, R, mu, and D_T (2D, 3D) and D_V (3D). */
-    private static List<ParamSpec> transport(boolean positiveVelocity, int dimensions) {
+    /**
+     * The medium's specs: v, D, R, mu, and D_T (2D, 3D) and D_V (3D).
+     *
+     * @param positiveVelocity whether v must be &gt; 0
+     * @param dimensions 1, 2 or 3
+     * @return the specs, in listing order
+     */
+    static List<ParamSpec> transport(boolean positiveVelocity, int dimensions) {
         final ParamSpec v = ParamSpec.number("v", positiveVelocity
             ? "velocity along x, into the domain [L/T]" : "velocity along x [L/T]");
         final List<ParamSpec> specs = new ArrayList<>(List.of(
@@ -148,8 +163,14 @@ final class Families {
             ParamSpec.number("Ci", "initial concentration in the domain [C]").byDefault(0)};
     }
 
-    /** The common specs followed by the family's own. */
-    private static List<ParamSpec> specs(List<ParamSpec> common, ParamSpec... own) {
+    /**
+     * The common specs followed by the family's own.
+     *
+     * @param common the medium's specs
+     * @param own the family's own
+     * @return all of them, in listing order
+     */
+    static List<ParamSpec> specs(List<ParamSpec> common, ParamSpec... own) {
         final List<ParamSpec> all = new ArrayList<>(common);
         all.addAll(List.of(own));
         return all;
@@ -187,17 +208,35 @@ final class Families {
         }
     }
 
-    /** The amount C·exp(−μt/R) of a released or initial amount that only decays. */
-    private static Budget decaying(Params p, double amount) {
+    /**
+     * The amount C·exp(−μt/R) of a released or initial amount that only decays.
+     *
+     * @param p the family's parameters (mu and R are read)
+     * @param amount the amount C at t = 0
+     * @return the budget
+     */
+    static Budget decaying(Params p, double amount) {
         final double rate = p.get("mu") / p.get("R");
         return t -> OptionalDouble.of(amount * Math.exp(-rate * t));
     }
 
     /** A closed-form amount in solution, per family. */
     @FunctionalInterface
-    private interface Budget {
+    interface Budget {
+        /**
+         * Returns the amount in solution at time t.
+         *
+         * @param t time
+         * @return the amount, or empty if it has no finite closed form
+         */
         OptionalDouble mass(double t);
 
+        /**
+         * Returns the far-field level at time t.
+         *
+         * @param t time
+         * @return the level (0 unless overridden)
+         */
         default double background(double t) {
             return 0.0;
         }
@@ -266,7 +305,14 @@ final class Families {
         }
     }
 
-    private static Field line(Solution1D s, Budget budget) {
+    /**
+     * Wraps a one-dimensional solution as a field.
+     *
+     * @param s the solution
+     * @param budget its closed-form amount in solution, or null for none
+     * @return the field
+     */
+    static Field line(Solution1D s, Budget budget) {
         return new LineField(s, budget);
     }
 

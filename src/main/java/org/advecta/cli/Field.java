@@ -2,6 +2,7 @@ package org.advecta.cli;
 
 import java.util.Optional;
 import java.util.OptionalDouble;
+import org.advecta.quadrature.Estimate;
 import org.advecta.solution.Solution1D;
 
 /**
@@ -93,5 +94,74 @@ interface Field {
      */
     default Optional<Solution1D> line() {
         return Optional.empty();
+    }
+
+    /**
+     * Tells whether the field is a steady state: c does not depend on t, and t is not one of
+     * its coordinates (a t column of a points table is then passed through unread).
+     *
+     * @return true for a steady state
+     */
+    default boolean steady() {
+        return false;
+    }
+
+    /**
+     * Tells whether {@link #gradient} and {@link #flux} are available.
+     *
+     * @return false for fields known only as values (the continuous sources)
+     */
+    default boolean hasDerivatives() {
+        return true;
+    }
+
+    /**
+     * Tells whether the field is computed by quadrature with an error bound
+     * ({@link #estimate}).
+     *
+     * @return true for quadrature fields
+     */
+    default boolean hasErrorBound() {
+        return false;
+    }
+
+    /**
+     * Returns the concentration with its quadrature error bound; its value is
+     * {@link #value}'s, bit for bit.
+     *
+     * @param x position along the flow
+     * @param y position across the flow (2D, 3D)
+     * @param z position in the third direction (3D)
+     * @param t time
+     * @return the value and its error bound
+     * @throws IllegalArgumentException if the library rejects an argument
+     * @throws IllegalStateException if the field has no error bound
+     */
+    default Estimate estimate(double x, double y, double z, double t) {
+        throw new IllegalStateException("no error bound: the family is a closed form");
+    }
+
+    /**
+     * Tells whether the field is the plume of a continuous source, which keeps adding solute
+     * (so that no fixed amount can be balanced against a window's integral).
+     *
+     * @return true for a continuous source
+     */
+    default boolean continuousSource() {
+        return false;
+    }
+
+    /**
+     * Returns the steady state that a continuous source's c(x, y, z, t) approaches, when
+     * there is one.
+     *
+     * @param x position along the flow
+     * @param y position across the flow (2D, 3D)
+     * @param z position in the third direction (3D)
+     * @return c(x, y, z, ∞), or empty (no steady state, or not a continuous source)
+     * @throws IllegalArgumentException if the library rejects an argument
+     */
+    default OptionalDouble steadyValue(double x, double y, double z) {
+        return OptionalDouble.empty();
     }
 }

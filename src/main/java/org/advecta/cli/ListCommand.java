@@ -50,11 +50,14 @@ final class ListCommand implements Callable<Integer> {
         out.printf(Locale.ROOT, "  %s%n", f.summary());
         int keyWidth = 3;
         int defaultWidth = 7;
+        int rangeWidth = 20;
         for (ParamSpec p : f.params()) {
             keyWidth = Math.max(keyWidth, p.key().length());
             defaultWidth = Math.max(defaultWidth, p.defaultText().length());
+            rangeWidth = Math.max(rangeWidth, p.rangeText().length());
         }
-        final String row = "  %-" + keyWidth + "s  %-" + defaultWidth + "s  %-20s  %s%n";
+        final String row = "  %-" + keyWidth + "s  %-" + defaultWidth + "s  %-" + rangeWidth
+            + "s  %s%n";
         out.printf(Locale.ROOT, row, "key", "default", "range", "meaning");
         for (ParamSpec p : f.params()) {
             out.printf(Locale.ROOT, row, p.key(), p.defaultText(), p.rangeText(), p.meaning());

@@ -54,17 +54,19 @@ final class RunCommand implements Callable<Integer> {
     public Integer call() {
         final Plots.Format format = Plots.Format.parse(plots);
         final Scenario s = Scenario.read(scenario);
-        try {
-            Files.createDirectories(out);
-        } catch (IOException e) {
-            throw new UserError("cannot create folder " + out + ": " + Main.reason(e), e);
-        }
         final Runner runner = new Runner(s, quiet ? null : io.err());
         try {
             runner.compute();
         } catch (IllegalArgumentException e) {
-            // The scenario's checks should leave nothing for the library to reject.
+            // What the scenario's checks leave to the library: e.g. a grid point on a
+            // continuous source. Computed before the folder is made, so a failed run leaves
+            // nothing behind.
             throw new UserError(scenario + ": " + e.getMessage(), e);
+        }
+        try {
+            Files.createDirectories(out);
+        } catch (IOException e) {
+            throw new UserError("cannot create folder " + out + ": " + Main.reason(e), e);
         }
         final List<Path> written = runner.write(out, format);
         if (!quiet) {

@@ -22,6 +22,10 @@ final class Runner {
 
     private static final double GOLDEN = (Math.sqrt(5) - 1) / 2;
 
+    /** The summary's note where a mass balance would be: none for a continuous source. */
+    static final String CONTINUOUS = "  (no mass balance: a continuous source keeps releasing "
+        + "solute, so there is no fixed amount to compare a window's integral with)\n";
+
     private final Scenario s;
     private final PrintStream progressTo;
     private final long total;
@@ -133,7 +137,7 @@ final class Runner {
             written.add(csv);
             final List<String> names = new ArrayList<>();
             for (double t : p.times) {
-                names.add("t = " + num(t) + " " + s.time);
+                names.add(when(t));
             }
             final Path plot = dir.resolve("profiles" + ext);
             Plots.write(Plots.curves(s.title + ": profiles" + across(p.y, p.z),
@@ -181,8 +185,8 @@ final class Runner {
             });
             written.add(csv);
             final Path plot = dir.resolve("plan" + ext);
-            final JFreeChart chart = Plots.plan(s.title + ": plan view at t = " + num(p.time)
-                    + " " + s.time + (s.family.dimensions() == 3 ? ", z = " + num(p.z) : ""),
+            final JFreeChart chart = Plots.plan(s.title + ": plan view at " + when(p.time)
+                    + (s.family.dimensions() == 3 ? ", z = " + num(p.z) : ""),
                 "x [" + s.length + "]", "y [" + s.length + "]", c, p.x, p.y, plan);
             Plots.write(chart, plot, format);
             written.add(plot);
@@ -208,6 +212,9 @@ final class Runner {
             h.add("point");
         }
         h.addAll(s.family.coordinates());
+        if (s.field.steady()) {
+            h.remove("t");
+        }
         h.add("c");
         return h;
     }
@@ -225,9 +232,16 @@ final class Runner {
         if (d >= 3) {
             r.add(Double.toString(z));
         }
-        r.add(Double.toString(t));
+        if (!s.field.steady()) {
+            r.add(Double.toString(t));
+        }
         r.add(Double.toString(c));
         return r;
+    }
+
+    /** "t = 30 d", or "steady state". */
+    private String when(double t) {
+        return s.field.steady() ? "steady state" : "t = " + num(t) + " " + s.time;
     }
 
     private String levelLabel() {
@@ -275,9 +289,10 @@ final class Runner {
     private void breakthroughSummary(StringBuilder b) {
         final Scenario.Breakthrough bt = s.breakthrough;
         b.append('\n').append(String.format(Locale.ROOT,
-            "Breakthrough curves, t = %s to %s %s (%d samples; peaks and arrivals refined on "
+            "Breakthrough curves, t = %s to %s %s (%d samples; %s refined on "
                 + "the exact solution between samples)%n",
-            num(bt.t.from()), num(bt.t.to()), s.time, bt.t.points()));
+            num(bt.t.from()), num(bt.t.to()), s.time, bt.t.points(),
+            s.field.continuousSource() ? "arrivals" : "peaks and arrivals"));
         for (int k = 0; k < bt.at.size(); k++) {
             final Scenario.Probe q = bt.at.get(k);
             final double[] c = curves[k];
@@ -289,6 +304,10 @@ final class Runner {
             }
             b.append(String.format(Locale.ROOT, "  %s at %s %s:%n", q.name,
                 where(q.x, q.y, q.z), s.length));
+            if (s.field.continuousSource()) {
+                continuousCurve(b, q, bt.t, c);
+                continue;
+            }
             final double[] peak = peak(q, bt.t, best, c[best]);
             String note = "";
             if (best == 0) {
@@ -303,6 +322,33 @@ final class Runner {
                     .append(s.concentration).append(": ").append(arrival(q, bt.t, c))
                     .append('\n');
             }
+        }
+    }
+
+    /**
+     * A continuous source's curve rises towards its steady state (without a rate change there
+     * is no peak to report): c at the end of the window, the steady state and the arrival.
+     */
+    private void continuousCurve(StringBuilder b, Scenario.Probe q, Grid t, double[] c) {
+        final double last = c[c.length - 1];
+        b.append(String.format(Locale.ROOT, "    c = %s %s at the end of the window (t = %s %s)",
+            num(last), s.concentration, num(t.to()), s.time));
+        final OptionalDouble steady = s.field.steadyValue(q.x, q.y, q.z);
+        if (steady.isPresent()) {
+            final double cs = steady.getAsDouble();
+            b.append(String.format(Locale.ROOT, "; steady state c = %s %s", num(cs),
+                s.concentration));
+            if (cs != 0) {
+                b.append(String.format(Locale.ROOT, " (%s %% of it reached)",
+                    num(100 * last / cs)));
+            }
+        } else {
+            b.append("; no steady state (v = 0 and mu = 0: c keeps growing)");
+        }
+        b.append('\n');
+        if (s.level != null) {
+            b.append("    c first reaches ").append(num(s.level)).append(' ')
+                .append(s.concentration).append(": ").append(arrival(q, t, c)).append('\n');
         }
     }
 
@@ -383,9 +429,8 @@ final class Runner {
                     best = i;
                 }
             }
-            b.append(String.format(Locale.ROOT, "  t = %s %s: max c = %s %s at x = %s %s%n",
-                num(p.times[k]), s.time, num(c[best]), s.concentration, num(x[best]),
-                s.length));
+            b.append(String.format(Locale.ROOT, "  %s: max c = %s %s at x = %s %s%n",
+                when(p.times[k]), num(c[best]), s.concentration, num(x[best]), s.length));
             if (balance) {
                 final double bg = s.field.background(p.times[k]);
                 final double inWindow = trapezoid(x, c, bg);
@@ -393,7 +438,9 @@ final class Runner {
                     inWindow, s.field.mass(p.times[k]), s.concentration + " " + s.length);
             }
         }
-        if (!balance) {
+        if (s.field.continuousSource()) {
+            b.append(CONTINUOUS);
+        } else if (!balance) {
             b.append("  (mass balance: see the plan view; a profile is a line through a "
                 + s.family.dimensions() + "D field)\n");
         }
@@ -402,8 +449,8 @@ final class Runner {
     private void planSummary(StringBuilder b) {
         final Scenario.Plan p = s.plan;
         b.append('\n').append(String.format(Locale.ROOT,
-            "Plan view at t = %s %s%s, x = %s to %s, y = %s to %s %s (%d x %d cells)%n",
-            num(p.time), s.time, s.family.dimensions() == 3 ? ", z = " + num(p.z) : "",
+            "Plan view at %s%s, x = %s to %s, y = %s to %s %s (%d x %d cells)%n",
+            when(p.time), s.family.dimensions() == 3 ? ", z = " + num(p.z) : "",
             num(p.x.from()), num(p.x.to()), num(p.y.from()), num(p.y.to()), s.length,
             p.x.points(), p.y.points()));
         int bi = 0;
@@ -418,7 +465,9 @@ final class Runner {
         }
         b.append(String.format(Locale.ROOT, "  max c = %s %s at (%s, %s) %s%n",
             num(plan[bj][bi]), s.concentration, num(p.x.at(bi)), num(p.y.at(bj)), s.length));
-        if (s.family.dimensions() == 2) {
+        if (s.field.continuousSource()) {
+            b.append(CONTINUOUS);
+        } else if (s.family.dimensions() == 2) {
             final double[] x = p.x.values();
             final double[] y = p.y.values();
             final double[] rows = new double[p.y.points()];

@@ -208,9 +208,10 @@ final class Scenario {
         }
 
         final int d = family.dimensions();
+        final boolean steady = field.steady();
         final Table p = root.table("profiles", false).expect("times", "x", "y", "z");
         if (p.isPresent()) {
-            final double[] times = p.numbers("times");
+            final double[] times = steady ? steadyTime(p, "times") : p.numbers("times");
             for (int i = 0; i < times.length; i++) {
                 if (!(times[i] > 0)) {
                     throw p.error("times", "t = " + ParamSpec.format(times[i])
@@ -227,6 +228,10 @@ final class Scenario {
         p.finish();
 
         final Table b = root.table("breakthrough", false).expect("t", "at");
+        if (b.isPresent() && steady) {
+            throw root.error("breakthrough", "no breakthrough curves for a steady state "
+                + "(steady = true: c does not change in time)");
+        }
         if (b.isPresent()) {
             final Grid t = b.grid("t");
             if (!(t.from() >= 0)) {
@@ -254,7 +259,7 @@ final class Scenario {
                 throw root.error("plan", "a plan view needs a 2D or 3D family ("
                     + family.name() + " is 1D)");
             }
-            final double at = v.number("time");
+            final double at = steady ? steadyTime(v, "time")[0] : v.number("time");
             if (!(at > 0)) {
                 throw v.error("time", ParamSpec.format(at) + ": must be > 0");
             }
@@ -281,6 +286,18 @@ final class Scenario {
                 + "[breakthrough] or [plan]");
         }
         root.finish();
+    }
+
+    /**
+     * The time of a steady state's profile or plan view: none may be given; +∞ stands for it
+     * (the steady field does not read t).
+     */
+    private static double[] steadyTime(Table t, String key) {
+        if (t.get(key) != null) {
+            throw t.error(key, "a steady state (steady = true) has no time: leave " + key
+                + " out");
+        }
+        return new double[] {Double.POSITIVE_INFINITY};
     }
 
     private void requireDomain(Table t, String key, double x) {
@@ -422,7 +439,7 @@ final class Scenario {
             if (n.isNumber()) {
                 return n.doubleValue();
             }
-            if (n.isTextual()) {
+            if (n.isTextual() || n.isBoolean()) {
                 return n.asText();
             }
             throw error(key, "must be a number or a string");

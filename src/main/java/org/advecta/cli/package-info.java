@@ -13,6 +13,8 @@
  * {@code key=value} arguments against them, {@code run} reads a scenario's {@code [medium]}
  * and {@code [source]} tables with the same keys, {@code fit} and {@code check} take the
  * same {@code key=value} arguments (for {@code fit}: fixed values and starting values).
+ * The continuous sources ({@code PlumeFamilies}) and the solutions next to a wall
+ * ({@code HalfSpaceFamilies}) are registered there from their own classes.
  *
  * <p>User errors (unknown family or key, missing or malformed values, malformed CSV lines,
  * out-of-range scenario values, unreadable files) end with one line on standard error and

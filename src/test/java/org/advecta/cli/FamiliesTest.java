@@ -17,8 +17,12 @@ import org.junit.jupiter.params.provider.CsvSource;
 class FamiliesTest {
 
     /** A valid value for every required key of every family. */
-    private static final Map<String, Object> REQUIRED = Map.of(
-        "v", "0.5", "D", "0.1", "a", "-1", "b", "1", "s0", "0.2", "DT", "0.05", "DV", "0.01");
+    private static final Map<String, Object> REQUIRED = Map.ofEntries(
+        Map.entry("v", "0.5"), Map.entry("D", "0.1"), Map.entry("a", "-1"), Map.entry("b", "1"),
+        Map.entry("s0", "0.2"), Map.entry("DT", "0.05"), Map.entry("DV", "0.01"),
+        Map.entry("y1", "-1"), Map.entry("y2", "1"), Map.entry("z1", "-1"), Map.entry("z2", "1"),
+        Map.entry("wall", "absorbing"), Map.entry("axis", "x"), Map.entry("x0", "1"),
+        Map.entry("y0", "1"), Map.entry("z0", "1"));
 
     private static Params params(Family f, Map<String, Object> extra) {
         final Map<String, Object> raw = new LinkedHashMap<>();
