@@ -24,8 +24,12 @@ import org.advecta.transport.TransportParameters;
  * sum with |fₖ|; for non-negative data a relative bound), κ the condition number with
  * respect to the positions and the decay, (|x| + |vt/R| + max|ξ|)·|∂c/∂x|/|c| + μt/R
  * (measured against 50-digit quadrature: at most 0.18 of that bound, 622 units of 2⁻⁵³ at
- * κ ≈ 10³). Each end of each segment enters with a single rounding of its distance
- * x − vt/R − ξ (two-sums), so a point near a node far from the origin keeps its accuracy.
+ * κ ≈ 10³). Where the contributions themselves are subnormal (far tails, below 2.2e-308)
+ * the bound holds in absolute terms only to about 2¹¹·{@link Double#MIN_VALUE} per segment:
+ * the segment integrals are formed from subnormal exponentials before their final scaling
+ * (see the property test of the weights). Each end of each segment enters with a single
+ * rounding of its distance x − vt/R − ξ (two-sums), so a point near a node far from the
+ * origin keeps its accuracy.
  * Segments farther than Y_cut widths from x − vt/R, with Y_cut² = 745 + ln max(1, max|f|),
  * are left out: together they hold less than half of {@link Double#MIN_VALUE}. The gradient
  * is, on the infinite line, the sum of φ(a)G(a) − φ(b)G(b) + φ′·∫ₐᵇG over the segments

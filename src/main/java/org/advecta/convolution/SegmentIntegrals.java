@@ -33,6 +33,12 @@ import org.advecta.special.Exponentials;
  * P/(2h) = (h/2)∫₋₁¹ (1 + u)·exp(−(m + hu)²) du is summed by the 10-point Gauss–Legendre
  * rule over positive terms (exp(−y²) changes by less than a factor e on the segment, and the
  * rule's error there is below 1e-17 relative; Abramowitz &amp; Stegun 25.4.29).
+ *
+ * <p>Where a weight is subnormal (|y| beyond about 26.6) its terms are subnormal before the
+ * final division by 2h√π, which then scales their granularity: the weights hold to about
+ * 2¹¹·{@link Double#MIN_VALUE} absolutely there (measured: 1204 MIN_VALUE at worst over
+ * 2·10⁷ random segments with |m| ≤ 45, 10⁻¹² ≤ h ≤ 10³), not relatively. Factoring exp(−lo²)
+ * out through the scaled exponential would make them relative; not done yet.
  */
 final class SegmentIntegrals {
 
