@@ -37,7 +37,9 @@ import org.advecta.transport.TransportParameters;
  * exists only when U &gt; 0 (v ≠ 0 or μ &gt; 0).
  *
  * <p><b>Mass flux</b> through the line x = X (per unit depth): the closed form of
- * {@link PointSource3D#massFlux(double, double)}, which it shares.
+ * {@link PointSource3D#massFlux(double, double)}, which it shares; beside an absorbing wall,
+ * the quadrature in time with the factor erf(a/√(4D_Tτ/R)) of
+ * {@link PointSource3D#massFluxEstimate(double, double)} ({@link #massFluxEstimate}).
  *
  * <p><b>Accuracy.</b> {@link #estimate(double, double, double)}: the exact value lies within
  * the returned error bound (checked against mpmath), and for a constant rate without walls
@@ -47,7 +49,8 @@ import org.advecta.transport.TransportParameters;
  * a wall the bound is the sum of the terms' bounds, which may exceed 1e-10 of a result that
  * is their difference. {@link #steadyValue(double, double)} and the mass fluxes: within
  * max(16, 2κ) ULP wherever the result is a normal double, for a constant rate without
- * absorbing walls.
+ * absorbing walls; beside one, within the bound {@link #massFluxEstimate} returns (at most
+ * 1e-10 relative for a constant rate).
  *
  * <p><b>Domain.</b> Coordinates finite; t finite and ≥ 0; the source line itself is excluded
  * (c is infinite there); with a wall (across y), points on the source's side.

@@ -34,13 +34,17 @@ import org.advecta.transport.TransportParameters;
  *
  * <p><b>Mass flux</b> through the whole plane x = X: the closed form of
  * {@link PointSource3D#massFlux(double, double)} with the total rate (the rectangle's
- * extent does not matter once the plane is integrated over).
+ * extent does not matter once the plane is integrated over). Beside an absorbing wall it
+ * does: {@link #massFluxEstimate} integrates the 1-D flux density times, per absorbing wall,
+ * the mean of erf(a/√(4D_Tτ/R)) over the rectangle's distances a ∈ [a₁, a₂] from it
+ * (the mean of the point source's factor over the uniformly spread release).
  *
  * <p><b>Accuracy.</b> The exact value lies within the returned error bound (checked against
  * mpmath), and for a constant rate without walls the bound is at most 1e-10 relative (it
  * includes the rounding of the exponents); for a rate history or a wall it is the sum of the
  * terms' bounds. The mass fluxes are within max(16, 2κ) ULP, for a constant rate without
- * absorbing walls.
+ * absorbing walls; beside one, within the bound {@link #massFluxEstimate} returns (at most
+ * 1e-10 relative for a constant rate).
  *
  * <p><b>Domain.</b> Coordinates finite (points on the patch included); t finite and ≥ 0; the
  * steady state needs U = √(v² + 4μD_L) &gt; 0; with walls, points on the patch's side.

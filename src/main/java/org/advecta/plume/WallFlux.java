@@ -43,7 +43,8 @@ import org.advecta.special.ErrorFunctions;
  * (no cancellation: the subtracted part is at most 0.57 of u₂ − u₁).
  *
  * <p><b>Error bound.</b> |K₁₅ − G₇| summed over the subintervals, plus the tail bounds,
- * plus the rounding of the exponent and the sums, 2⁻⁵³(64 + 8(|s| + A²)) relative to the
+ * plus the rounding of the exponent and the sums, 2⁻⁵³(64 + 8(|s| + |ln max(|p₁|, |p₂|)| + A²))
+ * relative to the
  * result, or to ∫|j τ| dw (integrated as well) where j changes sign (R Δx + vτ = 0 inside the
  * range: a plane against the flow, where the positive and negative parts cancel): the kind of
  * bound the other quadratures of the package return.
@@ -255,13 +256,24 @@ final class WallFlux {
                     : Math.log(ut / rr);
                 shift = 0;
             }
+            if (!(alpha < Double.POSITIVE_INFINITY)) {
+                // R r²/(4 D_L t) overflows: the flux is below exp(−1e308), zero in double
+                value = 0;
+                error = 0;
+                return;
+            }
             final double root = Math.sqrt(tauRef);
             final double p1 = flow.retardation * dx / root;
             final double p2 = flow.velocity * root;
+            // p₁, p₂ are scaled by the larger of them, whose logarithm joins the exponent of
+            // the scale (so that neither a huge p nor a tiny e^(s − A²) is formed alone)
+            final double logP = Math.log(Math.max(Math.abs(p1), Math.abs(p2)));
             signP1 = Math.signum(p1);
-            logP1 = p1 == 0 ? 0 : Math.log(Math.abs(p1));
+            logP1 = p1 == 0 ? 0 : Math.log(Math.abs(p1)) - logP;
             signP2 = Math.signum(p2);
-            logP2 = p2 == 0 ? 0 : Math.log(Math.abs(p2));
+            logP2 = p2 == 0 ? 0 : Math.log(Math.abs(p2)) - logP;
+            final double q1 = p1 == 0 ? 0 : Math.exp(logP1);
+            final double q2 = p2 == 0 ? 0 : Math.exp(logP2);
             for (int i = 0; i < 2; i++) {
                 if (on[i]) {
                     invSigma[i] = 1 / Math.sqrt(4 * disp[i] * tauRef / flow.retardation);
@@ -275,14 +287,12 @@ final class WallFlux {
             // tails (the erf factors are ≤ 1): below lo, with u = e^(−w) and E ≥ α(u − 1) − β,
             // ∫ (|p₁|u^(1/2) + |p₂|u^(−1/2)) e^(−E) dw ≤ (|p₁|e^(lo/2) + |p₂|e^(3lo/2)) e^(−CUT)/α;
             // above hi, with u = e^w, ≤ (|p₁|e^(−3hi/2) + |p₂|e^(−hi/2)) e^(−CUT)/β
-            double tail = (Math.abs(p1) * Math.exp(0.5 * lo) + Math.abs(p2) * Math.exp(1.5 * lo))
-                * TAIL / alpha;
+            double tail = (q1 * Math.exp(0.5 * lo) + q2 * Math.exp(1.5 * lo)) * TAIL / alpha;
             if (hi < wEnd) {
-                tail += (Math.abs(p1) * Math.exp(-1.5 * hi) + Math.abs(p2) * Math.exp(-0.5 * hi))
-                    * TAIL / beta;
+                tail += (q1 * Math.exp(-1.5 * hi) + q2 * Math.exp(-0.5 * hi)) * TAIL / beta;
             }
             final double scale = ScaledExp.value(
-                1 / (2 * Math.sqrt(4 * Math.PI * flow.dL * flow.retardation)), s, shift);
+                1 / (2 * Math.sqrt(4 * Math.PI * flow.dL * flow.retardation)), s + logP, shift);
             // where the density changes sign (R Δx + vτ = 0 inside the range: a plane against
             // the flow) the positive and negative parts cancel, and rounding is relative to
             // ∫|j| rather than to the result: integrate |j| too for that part of the bound
@@ -296,8 +306,8 @@ final class WallFlux {
             quadrature.integrate(this, lo, hi, 0.0);
             value = scale * quadrature.value();
             final double size = Math.max(Math.abs(value), scale * magnitudeIntegral);
-            error = scale * (quadrature.error() + tail)
-                + size * ROUNDING * (64 + 8 * (Math.abs(s) + shift * shift));
+            error = scale * (quadrature.error() + tail) + (size == 0 ? 0.0
+                : size * ROUNDING * (64 + 8 * (Math.abs(s) + Math.abs(logP) + shift * shift)));
         }
     }
 }
