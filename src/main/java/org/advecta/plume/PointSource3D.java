@@ -43,7 +43,8 @@ import org.advecta.transport.TransportParameters;
  * the mass flux is the free-space flux above. Beside an absorbing wall it has no closed form:
  * {@link #massFluxEstimate(double, double)} integrates the 1-D flux density j(τ) of the
  * instantaneous release times erf(a/√(4D_Tτ/R)) per absorbing wall (a the source's distance
- * from it; the transverse mass the image pair leaves on the source's side, method of images)
+ * from it; the transverse mass the image pair leaves on the source's side, method of images,
+ * Carslaw &amp; Jaeger 1959, §2.10 and §10.10 — section numbers recalled, not re-checked)
  * over τ ∈ (0, t) by adaptive Gauss–Kronrod quadrature in log-time, with an error bound, and
  * {@link #massFlux(double, double)} returns its value.
  *

@@ -43,6 +43,7 @@ import org.advecta.special.ErrorFunctions;
  * (no cancellation: the subtracted part is at most 0.57 of u₂ − u₁).
  *
  * <p><b>Error bound.</b> |K₁₅ − G₇| summed over the subintervals, plus the tail bounds,
+ * plus the shift of the rounded upper limit (|integrand| there × 8·2⁻⁵³(1 + |w_end|)),
  * plus the rounding of the exponent and the sums, 2⁻⁵³(64 + 8(|s| + |ln max(|p₁|, |p₂|)| + A²))
  * relative to the
  * result, or to ∫|j τ| dw (integrated as well) where j changes sign (R Δx + vτ = 0 inside the
@@ -306,7 +307,11 @@ final class WallFlux {
             quadrature.integrate(this, lo, hi, 0.0);
             value = scale * quadrature.value();
             final double size = Math.max(Math.abs(value), scale * magnitudeIntegral);
-            error = scale * (quadrature.error() + tail) + (size == 0 ? 0.0
+            // the upper limit ln(Ut/(Rr)) is rounded (a few ulps of 1 + |w|): at a sharp front
+            // (high Péclet) the integrand there is large, so its shift counts
+            final double limit = hi == wEnd && hi < Double.POSITIVE_INFINITY
+                ? Math.abs(at(hi)) * ROUNDING * 8 * (1 + Math.abs(hi)) : 0.0;
+            error = scale * (quadrature.error() + tail + limit) + (size == 0 ? 0.0
                 : size * ROUNDING * (64 + 8 * (Math.abs(s) + Math.abs(logP) + shift * shift)));
         }
     }

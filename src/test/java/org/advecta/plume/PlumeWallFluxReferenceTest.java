@@ -82,18 +82,22 @@ class PlumeWallFluxReferenceTest {
                 s = wy == null ? s : s.withWall(wy);
                 final PointSource3D f = wz == null ? s : s.withWall(wz);
                 return new Source() {
+                    @Override
                     public Estimate estimate(double x, double t) {
                         return f.massFluxEstimate(x, t);
                     }
 
+                    @Override
                     public Estimate steady(double x) {
                         return f.steadyMassFluxEstimate(x);
                     }
 
+                    @Override
                     public double flux(double x, double t) {
                         return f.massFlux(x, t);
                     }
 
+                    @Override
                     public double steadyFlux(double x) {
                         return f.steadyMassFlux(x);
                     }
@@ -103,18 +107,22 @@ class PlumeWallFluxReferenceTest {
                 LineSource2D s = LineSource2D.of(p, x0, r.getDouble("ylo"), 1).withRateHistory(h);
                 final LineSource2D f = wy == null ? s : s.withWall(wy);
                 return new Source() {
+                    @Override
                     public Estimate estimate(double x, double t) {
                         return f.massFluxEstimate(x, t);
                     }
 
+                    @Override
                     public Estimate steady(double x) {
                         return f.steadyMassFluxEstimate(x);
                     }
 
+                    @Override
                     public double flux(double x, double t) {
                         return f.massFlux(x, t);
                     }
 
+                    @Override
                     public double steadyFlux(double x) {
                         return f.steadyMassFlux(x);
                     }
@@ -126,18 +134,22 @@ class PlumeWallFluxReferenceTest {
                 s = wy == null ? s : s.withWall(wy);
                 final PatchSource3D f = wz == null ? s : s.withWall(wz);
                 return new Source() {
+                    @Override
                     public Estimate estimate(double x, double t) {
                         return f.massFluxEstimate(x, t);
                     }
 
+                    @Override
                     public Estimate steady(double x) {
                         return f.steadyMassFluxEstimate(x);
                     }
 
+                    @Override
                     public double flux(double x, double t) {
                         return f.massFlux(x, t);
                     }
 
+                    @Override
                     public double steadyFlux(double x) {
                         return f.steadyMassFlux(x);
                     }
