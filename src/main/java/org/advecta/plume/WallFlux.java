@@ -202,7 +202,9 @@ final class WallFlux {
         public double at(double w) {
             final double h = Math.sinh(0.5 * w);
             // E as in LineSource2D: 2(α + β) sinh²(w/2) − (α − β) sinh w, both terms ≥ 0
-            final double e = 2 * (alpha + beta) * h * h - (alpha - beta) * Math.sinh(w);
+            // (exactly 0 at the reference point w = 0, also when 2(α + β) overflows)
+            final double e = w == 0 ? 0.0
+                : 2 * (alpha + beta) * h * h - (alpha - beta) * Math.sinh(w);
             double g = 0;
             if (signP1 != 0) {
                 g += signP1 * Math.exp(logP1 - e - 0.5 * w);
