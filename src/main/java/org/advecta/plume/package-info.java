@@ -11,7 +11,9 @@
  * with K₀; the mass flux through a plane x = const, which reduces every source to the
  * one-dimensional one) it is evaluated with overflow-free exp·erfc products; otherwise by
  * adaptive Gauss–Kronrod quadrature in log-time, returned with an error bound
- * ({@link org.advecta.quadrature.Estimate}).
+ * ({@link org.advecta.quadrature.Estimate}); so is the mass flux beside an absorbing wall,
+ * whose transverse factor erf(a/√(4D_Tτ/R)) stays inside the time integral
+ * ({@code massFluxEstimate}).
  *
  * <p>Common to all sources: a {@link org.advecta.plume.RateHistory} (piecewise-constant rate,
  * Duhamel superposition) and {@link org.advecta.plume.Wall}s parallel to the flow (method of

@@ -54,7 +54,11 @@ class PlumeInputTest {
         rejects("no z axis", () -> line.withWall(Wall.reflecting(Wall.Axis.Z, 1)));
         final PointSource3D walled = point.withWall(Wall.absorbing(Wall.Axis.Y, -1));
         rejects("y = -2.0", () -> walled.value(1, -2, 0, 1));
-        rejects("absorbing", () -> walled.massFlux(1, 1));
+        rejects("plane = 0.0", () -> walled.massFlux(0, 1));
+        rejects("t = -1.0", () -> walled.massFluxEstimate(1, -1));
+        rejects("plane = NaN", () -> walled.steadyMassFluxEstimate(Double.NaN));
+        rejects("v = 0 and mu = 0", () -> PointSource3D.of(TransportParameters.of(0, 1), 0, 0, 0,
+            1).withWall(Wall.absorbing(Wall.Axis.Y, -1)).steadyMassFlux(1));
         rejects("already set", () -> walled.withWall(Wall.reflecting(Wall.Axis.Y, 2)));
         rejects("out", () -> point.value(new double[2], new double[2], new double[2], 1,
             new double[1]));
