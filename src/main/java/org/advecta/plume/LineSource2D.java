@@ -33,7 +33,12 @@ import org.advecta.transport.TransportParameters;
  * exp(−α(e^(−w) − 1) − β(e^w − 1)): smooth, with no singularity at τ → 0 and exactly 1 at
  * its peak; the range is cut where the exponent reaches 50 (the tail bound is added to the
  * error), and the rest is integrated by adaptive Gauss–Kronrod (7/15) to a relative 1e-13
- * (see {@link Estimate}). The steady state uses {@link ModifiedBessel#k0Scaled(double)} and
+ * (see {@link Estimate}). A {@link RateHistory} is the same integral with the rate inside,
+ * ∫₀ᵗ q(t − τ) g(τ) dτ, split at τ = t − t_k: each piece is the window of the same integrand
+ * over τ ∈ [t − t_(k+1), t − t_k], normalised at its end nearest the peak (or at the peak
+ * inside it), cut and bounded likewise (a window end inside the cut needs no tail), with its
+ * ends kept to a few units of rounding of the window's own width (the differences t − t_k
+ * are formed exactly). The steady state uses {@link ModifiedBessel#k0Scaled(double)} and
  * exists only when U &gt; 0 (v ≠ 0 or μ &gt; 0).
  *
  * <p><b>Mass flux</b> through the line x = X (per unit depth): the closed form of
@@ -45,9 +50,12 @@ import org.advecta.transport.TransportParameters;
  * the returned error bound (checked against mpmath), and for a constant rate without walls
  * the bound is at most 1e-10 relative (it includes the rounding of the exponent, about
  * 8·2⁻⁵³ per unit of |s| + A², so very early times far from the source, whose values are
- * below about 1e-300, come closest); measured errors are below 3e-13. For a rate history or
- * a wall the bound is the sum of the terms' bounds, which may exceed 1e-10 of a result that
- * is their difference. {@link #steadyValue(double, double)} and the mass fluxes: within
+ * below about 1e-300, come closest); measured errors are below 3e-13. For a rate history whose
+ * rates are all ≥ 0 the same holds: its windows' integrands are ≥ 0, so the bound is at most
+ * 1e-10 relative to the result itself, also long after a release has ended (checked against
+ * mpmath on pulses); with a negative rate it is relative to Σ|q_k|·(window) instead. Beside
+ * a wall the bound is the sum of the images' bounds, which may exceed 1e-10 of a result that
+ * is their difference (an absorbing wall). {@link #steadyValue(double, double)} and the mass fluxes: within
  * max(16, 2κ) ULP wherever the result is a normal double, for a constant rate without
  * absorbing walls; beside one, within the bound {@link #massFluxEstimate} returns (at most
  * 1e-10 relative for a constant rate).
@@ -100,7 +108,9 @@ public final class LineSource2D {
     }
 
     /**
-     * Returns this source with a piecewise-constant rate instead (Duhamel superposition).
+     * Returns this source with a piecewise-constant rate instead: the Duhamel integral
+     * ∫₀ᵗ q(t − τ) g(τ) dτ, split where the rate changes (see {@link RateHistory}; the bound
+     * is at most 1e-10 relative when every rate is ≥ 0).
      *
      * @param rates the rate history
      * @return the new source

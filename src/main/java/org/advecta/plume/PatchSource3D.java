@@ -30,7 +30,11 @@ import org.advecta.transport.TransportParameters;
  * from the rectangle (each S factor is at most ½ exp(−d²R/(4Dτ)) outside it, and the
  * integrand is evaluated with that factor divided out, through erfcx). The range is cut where
  * the bound falls below e^(−50) of its peak (tail bound added to the error), and the rest is
- * integrated by adaptive Gauss–Kronrod (7/15) to a relative 1e-13.
+ * integrated by adaptive Gauss–Kronrod (7/15) to a relative 1e-13. A {@link RateHistory} is
+ * the Duhamel integral ∫₀ᵗ q(t − τ) g(τ) dτ split at τ = t − t_k: each piece is the window
+ * τ ∈ [t − t_(k+1), t − t_k] of the same integrand, with τ_c its end nearest the peak (or the
+ * peak inside it), cut and bounded likewise, its ends formed from the exact differences
+ * t − t_k.
  *
  * <p><b>Mass flux</b> through the whole plane x = X: the closed form of
  * {@link PointSource3D#massFlux(double, double)} with the total rate (the rectangle's
@@ -41,8 +45,10 @@ import org.advecta.transport.TransportParameters;
  *
  * <p><b>Accuracy.</b> The exact value lies within the returned error bound (checked against
  * mpmath), and for a constant rate without walls the bound is at most 1e-10 relative (it
- * includes the rounding of the exponents); for a rate history or a wall it is the sum of the
- * terms' bounds. The mass fluxes are within max(16, 2κ) ULP, for a constant rate without
+ * includes the rounding of the exponents). The same holds for a rate history whose rates are
+ * all ≥ 0 (its windows' integrands are ≥ 0; checked against mpmath on pulses, also long after
+ * the release); with a negative rate the bound is relative to Σ|q_k|·(window) instead, and
+ * beside a wall it is the sum of the images' bounds. The mass fluxes are within max(16, 2κ) ULP, for a constant rate without
  * absorbing walls; beside one, within the bound {@link #massFluxEstimate} returns (at most
  * 1e-10 relative for a constant rate).
  *
@@ -115,7 +121,9 @@ public final class PatchSource3D {
     }
 
     /**
-     * Returns this source with a piecewise-constant rate instead (Duhamel superposition).
+     * Returns this source with a piecewise-constant rate instead: the Duhamel integral
+     * ∫₀ᵗ q(t − τ) g(τ) dτ, split where the rate changes (see {@link RateHistory}; the bound
+     * is at most 1e-10 relative when every rate is ≥ 0).
      *
      * @param rates the rate history (total rates)
      * @return the new source
