@@ -81,14 +81,14 @@ final class TimeWindow {
             case UPPER:
                 wB = Math.log1p(upper[1] / upper[0]);
                 errB = 8 * ROUNDING * Math.abs(wB);
-                wA = fromZero ? Double.NEGATIVE_INFINITY : logRatio(lower, upper);
+                wA = fromZero ? Double.NEGATIVE_INFINITY : logOver(lower, upper[0]);
                 errA = fromZero ? 0 : 8 * ROUNDING * Math.abs(wA);
                 break;
             case LOWER:
                 wA = Math.log1p(lower[1] / lower[0]);
                 errA = 8 * ROUNDING * Math.abs(wA);
                 wB = upper[0] == Double.POSITIVE_INFINITY ? Double.POSITIVE_INFINITY
-                    : logRatio(upper, lower);
+                    : logOver(upper, lower[0]);
                 errB = 8 * ROUNDING * Math.abs(wB);
                 break;
             default:
@@ -148,9 +148,23 @@ final class TimeWindow {
     }
 
     /**
-     * ln(n/d) for positive double-double n, d, within 8·2⁻⁵³ |result|: through
-     * log1p((n − d)/d), with n_hi − d_hi exact (Sterbenz), when n/d ∈ [1/2, 2]; else through
-     * ln(n_hi/d_hi) plus the first-order corrections, where |result| ≥ ln 2.
+     * ln(n/d) for a positive double-double n and a positive double d (the normalisation
+     * point), within 8·2⁻⁵³ |result|: through log1p((n − d)/d), with n_hi − d exact
+     * (Sterbenz), when n_hi/d ∈ [1/2, 2]; else through ln(n_hi/d) plus the first-order
+     * correction n_lo/n_hi, where |result| ≥ ln 2 − 2⁻⁵².
+     */
+    static double logOver(double[] n, double d) {
+        if (n[0] >= 0.5 * d && n[0] <= 2 * d) {
+            return Math.log1p(((n[0] - d) + n[1]) / d);
+        }
+        return Math.log(n[0] / d) + n[1] / n[0];
+    }
+
+    /**
+     * ln(n/d) for positive double-double n, d (a window's width in w), within 8·2⁻⁵³ |result|:
+     * through log1p((n − d)/d), with n_hi − d_hi exact (Sterbenz), when n_hi/d_hi ∈ [1/2, 2]
+     * (dividing by d_hi instead of d costs a relative 2⁻⁵³); else through ln(n_hi/d_hi) plus
+     * the first-order corrections, where |result| ≥ ln 2 − 2⁻⁵².
      */
     static double logRatio(double[] n, double[] d) {
         if (n[0] >= 0.5 * d[0] && n[0] <= 2 * d[0]) {
