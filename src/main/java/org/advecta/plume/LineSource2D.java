@@ -33,7 +33,12 @@ import org.advecta.transport.TransportParameters;
  * exp(−α(e^(−w) − 1) − β(e^w − 1)): smooth, with no singularity at τ → 0 and exactly 1 at
  * its peak; the range is cut where the exponent reaches 50 (the tail bound is added to the
  * error), and the rest is integrated by adaptive Gauss–Kronrod (7/15) to a relative 1e-13
- * (see {@link Estimate}). The steady state uses {@link ModifiedBessel#k0Scaled(double)} and
+ * (see {@link Estimate}). A {@link RateHistory} is the same integral with the rate inside,
+ * ∫₀ᵗ q(t − τ) g(τ) dτ, split at τ = t − t_k: each piece is the window of the same integrand
+ * over τ ∈ [t − t_(k+1), t − t_k], normalised at its end nearest the peak (or at the peak
+ * inside it), cut and bounded likewise (a window end inside the cut needs no tail), with its
+ * ends kept to a few units of rounding of the window's own width (the differences t − t_k
+ * are formed exactly). The steady state uses {@link ModifiedBessel#k0Scaled(double)} and
  * exists only when U &gt; 0 (v ≠ 0 or μ &gt; 0).
  *
  * <p><b>Mass flux</b> through the line x = X (per unit depth): the closed form of
@@ -45,9 +50,12 @@ import org.advecta.transport.TransportParameters;
  * the returned error bound (checked against mpmath), and for a constant rate without walls
  * the bound is at most 1e-10 relative (it includes the rounding of the exponent, about
  * 8·2⁻⁵³ per unit of |s| + A², so very early times far from the source, whose values are
- * below about 1e-300, come closest); measured errors are below 3e-13. For a rate history or
- * a wall the bound is the sum of the terms' bounds, which may exceed 1e-10 of a result that
- * is their difference. {@link #steadyValue(double, double)} and the mass fluxes: within
+ * below about 1e-300, come closest); measured errors are below 3e-13. For a rate history whose
+ * rates are all ≥ 0 the same holds: its windows' integrands are ≥ 0, so the bound is at most
+ * 1e-10 relative to the result itself, also long after a release has ended (checked against
+ * mpmath on pulses); with a negative rate it is relative to Σ|q_k|·(window) instead. Beside
+ * a wall the bound is the sum of the images' bounds, which may exceed 1e-10 of a result that
+ * is their difference (an absorbing wall). {@link #steadyValue(double, double)} and the mass fluxes: within
  * max(16, 2κ) ULP wherever the result is a normal double, for a constant rate without
  * absorbing walls; beside one, within the bound {@link #massFluxEstimate} returns (at most
  * 1e-10 relative for a constant rate).
@@ -100,7 +108,9 @@ public final class LineSource2D {
     }
 
     /**
-     * Returns this source with a piecewise-constant rate instead (Duhamel superposition).
+     * Returns this source with a piecewise-constant rate instead: the Duhamel integral
+     * ∫₀ᵗ q(t − τ) g(τ) dτ, split where the rate changes (see {@link RateHistory}; the bound
+     * is at most 1e-10 relative when every rate is ≥ 0).
      *
      * @param rates the rate history
      * @return the new source
@@ -304,6 +314,7 @@ public final class LineSource2D {
     /** One evaluation's workspace and result (not thread-safe; one per call or batch). */
     private final class Evaluator implements TimeQuadrature.Integrand {
         private final TimeQuadrature quadrature = new TimeQuadrature();
+        private final TimeWindow window = new TimeWindow();
         private double alpha;
         private double beta;
         double value;
@@ -311,13 +322,23 @@ public final class LineSource2D {
 
         @Override
         public double at(double w) {
-            // exp(−(α(e^−w − 1) + β(e^w − 1))): the integrand over its peak value, with the
-            // exponent as 2(α + β) sinh²(w/2) − (α − β) sinh w: both terms are ≥ 0, since
-            // α ≥ β and w ≤ 0 where α &gt; β (the peak is then at the end of the range)
+            // exp(−(α(e^−w − 1) + β(e^w − 1))): the integrand over its value at the window's
+            // normalisation point, with the exponent as 2(α + β) sinh²(w/2) − (α − β) sinh w:
+            // both terms are ≥ 0, since α ≥ β for a window before the peak (normalised at its
+            // upper end, w ≤ 0), α ≤ β for one after it (w ≥ 0) and α = β at the peak
+            if (w == 0) {
+                return 1.0;    // exactly, also where 2(α + β) overflows
+            }
             final double h = Math.sinh(0.5 * w);
             return Math.exp(-(2 * (alpha + beta) * h * h - (alpha - beta) * Math.sinh(w)));
         }
 
+        /**
+         * c(t) = Σₖ qₖ ∫ g(τ) dτ over τ ∈ [t − t_(k+1), t − tₖ] (from 0 for the current
+         * piece): the Duhamel integral ∫₀ᵗ q(t − τ) g(τ) dτ split where the rate changes
+         * ({@link TimeWindow}); every window's integrand is ≥ 0, so its bound is relative to
+         * its own value.
+         */
         void evaluate(double x, double y, double t) {
             double v = 0;
             double err = 0;
@@ -328,8 +349,13 @@ public final class LineSource2D {
                 final double r = radius(x, y, dx, rho2);
                 final double s = flow.exponent(dx, rho2, r);
                 for (int k = 0; k < history.size() && history.time(k) < t; k++) {
-                    unit(r, s, t - history.time(k));
-                    final double f = images.sign(i) * history.step(k);
+                    final double q = history.rate(k);
+                    if (q == 0) {
+                        continue;
+                    }
+                    window.set(history, k, t);
+                    integrate(r, s);
+                    final double f = images.sign(i) * q;
                     v += f * value;
                     err += Math.abs(f) * error;
                 }
@@ -338,43 +364,72 @@ public final class LineSource2D {
             error = err;
         }
 
-        /** The unit-rate value and error at stretched distance r, exponent s, time t &gt; 0. */
-        private void unit(double r, double s, double t) {
+        /**
+         * The unit-rate integral over the window set in {@link #window}, at stretched distance
+         * r and exponent s: its value and error bound.
+         */
+        private void integrate(double r, double s) {
             final double rr = flow.retardation * r;
-            final double ut = flow.u * t;
-            final double wEnd;
-            final double shift;
-            final double root = 2 * Math.sqrt(flow.dL * flow.retardation) * Math.sqrt(t);
-            if (ut < rr) {
-                // peak after t: normalise at τ = t, where the exponent is s − A²
-                final double a = (rr - ut) / root;
-                alpha = rr * r / (4 * flow.dL * t);
-                beta = flow.u * ut / (4 * flow.dL * flow.retardation);
-                wEnd = 0;
-                shift = a;
+            final double bHi = window.upper[0];
+            final double aHi = window.lower[0];
+            // w = ln(τ/τ_n), τ_n the window's end nearest the integrand's peak τ_p = R r/U, or
+            // τ_p itself when the window contains it
+            final double tn;
+            if (flow.u * bHi < rr) {
+                tn = bHi;
+                window.place(TimeWindow.Normalisation.UPPER, 0, 0);
+            } else if (aHi > 0 && flow.u * aHi > rr) {
+                tn = aHi;
+                window.place(TimeWindow.Normalisation.LOWER, 0, 0);
             } else {
-                // peak at τ = R r/U, where a/τ = bτ = rU/(4D_L); the exponent there is s
+                tn = Double.NaN;
+                window.place(TimeWindow.Normalisation.PEAK, Math.log(flow.u * bHi / rr),
+                    Math.log(flow.u * aHi / rr));
+            }
+            final double shift;
+            if (Double.isNaN(tn)) {
+                // the peak, where a/τ = bτ = rU/(4D_L): the exponent there is s
                 alpha = r * flow.u / (4 * flow.dL);
                 beta = alpha;
-                wEnd = Math.log(ut / rr);
                 shift = 0;
+            } else {
+                // normalise at τ_n, where the exponent is s − A², A = (R r − Uτ_n)/√(4D_L R τ_n)
+                final double ut = flow.u * tn;
+                final double root = 2 * Math.sqrt(flow.dL * flow.retardation) * Math.sqrt(tn);
+                alpha = rr * r / (4 * flow.dL * tn);
+                beta = flow.u * ut / (4 * flow.dL * flow.retardation);
+                shift = (rr - ut) / root;
             }
-            // (bounded by ±FAR, where even the smallest positive α, β make the integrand 0)
+            if (!(alpha + beta < Double.POSITIVE_INFINITY)) {
+                // the exponent is infinite on the whole window but at one point (τ_n tiny or
+                // huge): the exact value is below MIN_VALUE, and so is its prefactor
+                value = 0;
+                error = 0;
+                return;
+            }
+            // cut where the exponent reaches CUT (bounded by ±FAR, where even the smallest
+            // positive α, β make the integrand 0); an end inside the cut needs no tail
             final double lo = Math.max(-FAR, -Math.log1p((CUT + beta) / alpha));
             final double hiCut = beta > 0 ? Math.min(FAR, Math.log1p((CUT + alpha) / beta))
                 : Double.POSITIVE_INFINITY;
-            final double hi = Math.min(wEnd, hiCut);
-            double tail = TAIL / (alpha + beta + CUT);
-            if (hi < wEnd) {
-                tail *= 2;
+            final double wA = window.wA;
+            final double wB = window.wB;
+            final double hi = Math.min(wB, hiCut);
+            final double oneTail = TAIL / (alpha + beta + CUT);
+            double tail = wA <= lo ? oneTail : 0;
+            if (hi < wB) {
+                tail += oneTail;
             }
-            quadrature.integrate(this, lo, hi, 0.0);
+            quadrature.integrate(this, Math.max(lo, wA), hi, 0.0);
+            // the ends' rounding (an end beyond a cut is covered by the tail bound)
+            final double ends = window.endError(wA > lo ? at(wA) : 0.0,
+                wB < hiCut ? at(wB) : 0.0);
             final double scale = ScaledExp.value(norm, s, shift);
             value = scale * quadrature.value();
-            // quadrature and tails, plus the rounding of the exponent s − A², whose terms are
-            // formed from rounded inputs (relative 8·2⁻⁵³ per unit of |s| + A², as κ says)
-            error = value == 0 ? scale * (quadrature.error() + tail)
-                : scale * (quadrature.error() + tail)
+            // quadrature, tails and ends, plus the rounding of the exponent s − A², whose terms
+            // are formed from rounded inputs (relative 8·2⁻⁵³ per unit of |s| + A², as κ says)
+            error = value == 0 ? scale * (quadrature.error() + tail + ends)
+                : scale * (quadrature.error() + tail + ends)
                     + Math.abs(value) * ROUNDING * (16 + 8 * (Math.abs(s) + shift * shift));
         }
     }

@@ -30,7 +30,11 @@ import org.advecta.transport.TransportParameters;
  * from the rectangle (each S factor is at most ½ exp(−d²R/(4Dτ)) outside it, and the
  * integrand is evaluated with that factor divided out, through erfcx). The range is cut where
  * the bound falls below e^(−50) of its peak (tail bound added to the error), and the rest is
- * integrated by adaptive Gauss–Kronrod (7/15) to a relative 1e-13.
+ * integrated by adaptive Gauss–Kronrod (7/15) to a relative 1e-13. A {@link RateHistory} is
+ * the Duhamel integral ∫₀ᵗ q(t − τ) g(τ) dτ split at τ = t − t_k: each piece is the window
+ * τ ∈ [t − t_(k+1), t − t_k] of the same integrand, with τ_c its end nearest the peak (or the
+ * peak inside it), cut and bounded likewise, its ends formed from the exact differences
+ * t − t_k.
  *
  * <p><b>Mass flux</b> through the whole plane x = X: the closed form of
  * {@link PointSource3D#massFlux(double, double)} with the total rate (the rectangle's
@@ -41,8 +45,10 @@ import org.advecta.transport.TransportParameters;
  *
  * <p><b>Accuracy.</b> The exact value lies within the returned error bound (checked against
  * mpmath), and for a constant rate without walls the bound is at most 1e-10 relative (it
- * includes the rounding of the exponents); for a rate history or a wall it is the sum of the
- * terms' bounds. The mass fluxes are within max(16, 2κ) ULP, for a constant rate without
+ * includes the rounding of the exponents). The same holds for a rate history whose rates are
+ * all ≥ 0 (its windows' integrands are ≥ 0; checked against mpmath on pulses, also long after
+ * the release); with a negative rate the bound is relative to Σ|q_k|·(window) instead, and
+ * beside a wall it is the sum of the images' bounds. The mass fluxes are within max(16, 2κ) ULP, for a constant rate without
  * absorbing walls; beside one, within the bound {@link #massFluxEstimate} returns (at most
  * 1e-10 relative for a constant rate).
  *
@@ -115,7 +121,9 @@ public final class PatchSource3D {
     }
 
     /**
-     * Returns this source with a piecewise-constant rate instead (Duhamel superposition).
+     * Returns this source with a piecewise-constant rate instead: the Duhamel integral
+     * ∫₀ᵗ q(t − τ) g(τ) dτ, split where the rate changes (see {@link RateHistory}; the bound
+     * is at most 1e-10 relative when every rate is ≥ 0).
      *
      * @param rates the rate history (total rates)
      * @return the new source
@@ -327,6 +335,7 @@ public final class PatchSource3D {
     /** One evaluation's workspace and result (not thread-safe; one per call or batch). */
     private final class Evaluator implements TimeQuadrature.Integrand {
         private final TimeQuadrature quadrature = new TimeQuadrature();
+        private final TimeWindow window = new TimeWindow();
         private double alpha;
         private double beta;
         private double tauC;
@@ -346,6 +355,12 @@ public final class PatchSource3D {
             return Math.exp(-e) * sy * sz;
         }
 
+        /**
+         * c(t) = Σₖ qₖ ∫ g(τ) dτ over τ ∈ [t − t_(k+1), t − tₖ] (from 0 for the current
+         * piece): the Duhamel integral ∫₀ᵗ q(t − τ) g(τ) dτ split where the rate changes
+         * ({@link TimeWindow}); every window's integrand is ≥ 0, so its bound is relative to
+         * its own value. For t = ∞, the final rate times the integral to ∞.
+         */
         void evaluate(double x, double y, double z, double t) {
             double v = 0;
             double err = 0;
@@ -353,15 +368,21 @@ public final class PatchSource3D {
                 yy = images.y(i, y);
                 zz = images.z(i, z);
                 if (t == Double.POSITIVE_INFINITY) {
-                    unit(x - x0, t);
+                    window.whole(t);
+                    integrate(x - x0);
                     final double f = images.sign(i) * history.finalRate();
                     v += f * value;
                     err += Math.abs(f) * error;
                     continue;
                 }
                 for (int k = 0; k < history.size() && history.time(k) < t; k++) {
-                    unit(x - x0, t - history.time(k));
-                    final double f = images.sign(i) * history.step(k);
+                    final double q = history.rate(k);
+                    if (q == 0) {
+                        continue;
+                    }
+                    window.set(history, k, t);
+                    integrate(x - x0);
+                    final double f = images.sign(i) * q;
                     v += f * value;
                     err += Math.abs(f) * error;
                 }
@@ -370,8 +391,11 @@ public final class PatchSource3D {
             error = err;
         }
 
-        /** Unit-rate value and error at offset dx, point (yy, zz), time t &gt; 0 (or ∞). */
-        private void unit(double dx, double t) {
+        /**
+         * The unit-rate integral over the window set in {@link #window}, at offset dx and point
+         * (yy, zz): its value and error bound.
+         */
+        private void integrate(double dx) {
             final double r = flow.retardation;
             final double dy = outside(yy, y1, y2);
             final double dz = outside(zz, z1, z2);
@@ -381,40 +405,64 @@ public final class PatchSource3D {
             // the maximum of σ/2 − a e^−σ − b e^σ: b X² − X/2 − a = 0
             final double peak = b > 0 ? (0.5 + Math.sqrt(0.25 + 4 * a * b)) / (2 * b)
                 : Double.POSITIVE_INFINITY;
-            tauC = Math.min(t, peak);
+            final double bHi = window.upper[0];
+            final double aHi = window.lower[0];
+            // w = ln(τ/τ_c), τ_c the window's end nearest the peak, or the peak inside it
+            if (bHi <= peak) {
+                tauC = bHi;
+                window.place(TimeWindow.Normalisation.UPPER, 0, 0);
+            } else if (aHi > peak) {
+                tauC = aHi;
+                window.place(TimeWindow.Normalisation.LOWER, 0, 0);
+            } else {
+                tauC = peak;
+                window.place(TimeWindow.Normalisation.PEAK, Math.log(bHi / tauC),
+                    Math.log(aHi / tauC));
+            }
             alpha = a / tauC;
             beta = b * tauC;
-            final double wEnd = t == Double.POSITIVE_INFINITY ? Double.POSITIVE_INFINITY
-                : Math.log(t / tauC);
-            // left cut: E(w) ≥ |w|/2 − β and E(w) ≥ α(e^|w| − 1) − β
+            if (!(alpha + beta < Double.POSITIVE_INFINITY)) {
+                // the exponent is infinite on the whole window but at one point (τ_c tiny or
+                // huge): the exact value is below MIN_VALUE, and so is its prefactor
+                value = 0;
+                error = 0;
+                return;
+            }
+            final double wA = window.wA;
+            final double wB = window.wB;
+            // left cut: E(w) ≥ |w|/2 − β and E(w) ≥ α(e^|w| − 1) − β; an end inside a cut
+            // needs no tail
             final double lo = -Math.min(2 * (CUT + beta),
                 alpha > 0 ? Math.log1p((CUT + beta) / alpha) : Double.POSITIVE_INFINITY);
-            double tail = 2 * TAIL;
-            double hi = wEnd;
-            if (wEnd > 0) {
+            double tail = wA <= lo ? 2 * TAIL : 0;
+            double hi = wB;
+            if (wB > 0) {
                 // right cut: β(e^w − 1) − w/2 − α ≥ CUT, by fixed-point iteration plus a margin
                 double w = 0;
                 for (int j = 0; j < 6; j++) {
                     w = Math.log1p((CUT + alpha + 0.5 * w) / beta);
                 }
                 final double cut = Math.log1p((CUT + alpha + 0.5 * w + 1) / beta);
-                if (cut < wEnd) {
+                if (cut < wB) {
                     hi = cut;
                     tail += TAIL / (CUT + 0.5);
                 }
             }
-            quadrature.integrate(this, lo, hi, 0.0);
+            quadrature.integrate(this, Math.max(lo, wA), hi, 0.0);
+            // the ends' rounding (an end beyond a cut is covered by the tail bound)
+            final double ends = window.endError(wA > lo ? at(wA) : 0.0,
+                wB <= hi && wB < Double.POSITIVE_INFINITY ? at(wB) : 0.0);
             // exponent at τ_c: Δx v/(2D_L) − a/τ_c − bτ_c = −ξ² − μτ_c/R − aYZ/τ_c
             final double xi = (r * dx - flow.velocity * tauC)
                 / (2 * Math.sqrt(flow.dL * r) * Math.sqrt(tauC));
             final double shift = -flow.decay * tauC / r - aYZ / tauC;
             final double scale = ScaledExp.value(norm * Math.sqrt(tauC), shift, xi);
             value = scale * quadrature.value();
-            // quadrature and tails, plus rounding: of the prefactor's exponent (relative
+            // quadrature, tails and ends, plus rounding: of the prefactor's exponent (relative
             // 8·2⁻⁵³ per unit of its size) and of the integrand's exponent, whose terms of size
             // (α + β)|w| cancel near the peak, where |w| ~ √(CUT/(α + β))
-            error = value == 0 ? scale * (quadrature.error() + tail)
-                : scale * (quadrature.error() + tail) + Math.abs(value)
+            error = value == 0 ? scale * (quadrature.error() + tail + ends)
+                : scale * (quadrature.error() + tail + ends) + Math.abs(value)
                     * LineSource2D.ROUNDING * (16 + 8 * (xi * xi - shift)
                         + 8 * Math.sqrt(CUT * (alpha + beta)));
         }

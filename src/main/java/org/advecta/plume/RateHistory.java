@@ -8,15 +8,26 @@ import org.advecta.internal.Checks;
  * A piecewise-constant source rate: rate q_k from time t_k until t_(k+1), the last rate for
  * ever after, and no release before t_0. Immutable and thread-safe.
  *
- * <p>A source with this history is the Duhamel superposition of constant-rate sources switched
- * on at each t_k with the rate step q_k − q_(k−1) (q_(−1) = 0):
+ * <p>A source with this history has the concentration given by Duhamel's theorem (Carslaw
+ * &amp; Jaeger 1959, §1.14), with g the source's response to a unit instantaneous release and
+ * c₁ its solution for a unit rate from time 0:
  * <pre>
- * c(t) = Σ_(t_k &lt; t) (q_k − q_(k−1)) · c₁(t − t_k)
+ * c(t) = ∫₀ᵗ q(t − τ) g(τ) dτ = Σ_(t_k &lt; t) q_k ∫ g(τ) dτ over τ ∈ [t − t_(k+1), t − t_k]
+ *      = Σ_(t_k &lt; t) (q_k − q_(k−1)) · c₁(t − t_k)          (q_(−1) = 0)
  * </pre>
- * where c₁ is the solution for a unit rate from time 0 (Duhamel's theorem; Carslaw &amp; Jaeger
- * 1959, §1.14). This is exact for a piecewise-constant rate. A rate that returns to zero
- * makes two nearly equal terms cancel once the release has passed: the absolute error is then
- * about 2⁻⁵³ × the largest term, not relative to the (small) result.
+ * (the first window of the sum starts at τ = 0 for the current piece). Both forms are exact for
+ * a piecewise-constant rate; they differ in rounding.
+ *
+ * <p><b>Accuracy.</b> {@link LineSource2D} and {@link PatchSource3D} evaluate the window form:
+ * every window's integrand is ≥ 0 and is integrated to its own relative error, so the
+ * returned bound is at most 1e-10 of the result for a history whose rates are all ≥ 0, also
+ * once a release has ended and the result is small. With a negative rate (withdrawal) the
+ * windows can cancel, and the bound is then relative to Σ|q_k|·(window integral), not to the
+ * result. {@link PointSource3D} and the closed-form mass fluxes evaluate the step form: a
+ * rate that returns to zero makes nearly equal terms cancel once the release has passed, and
+ * the absolute error is then about 2⁻⁵³ × the largest term, not relative to the (small)
+ * result; so are the quadrature mass fluxes beside an absorbing wall
+ * ({@code massFluxEstimate}), whose bound is the sum of the terms' bounds.
  */
 public final class RateHistory {
 

@@ -16,7 +16,7 @@
  * ({@code massFluxEstimate}).
  *
  * <p>Common to all sources: a {@link org.advecta.plume.RateHistory} (piecewise-constant rate,
- * Duhamel superposition) and {@link org.advecta.plume.Wall}s parallel to the flow (method of
+ * Duhamel's theorem) and {@link org.advecta.plume.Wall}s parallel to the flow (method of
  * images). The rate q is the source's mass rate divided by whatever converts mass into the
  * concentration's units (the porosity, for a concentration per volume of water); it is the
  * growth rate of ∫ R c dV without decay, and at steady state without decay the mass flux

@@ -7,6 +7,7 @@ import org.advecta.quadrature.Estimate;
 import org.advecta.plume.LineSource2D;
 import org.advecta.plume.PatchSource3D;
 import org.advecta.plume.PointSource3D;
+import org.advecta.plume.RateHistory;
 import org.advecta.transport.TransportParameters;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -40,7 +41,11 @@ import org.openjdk.jmh.annotations.Warmup;
  *   <li>{@code lineLate}: {@link LineSource2D#value(double, double, double)} at a time late
  *       enough to equal the steady state: the quadrature the K₀ closed form replaces;</li>
  *   <li>{@code patchValue}, {@code patchSteady}: {@link PatchSource3D} (quadrature);</li>
- *   <li>{@code massFlux}: {@link PointSource3D#massFlux(double, double)} (closed form).</li>
+ *   <li>{@code massFlux}: {@link PointSource3D#massFlux(double, double)} (closed form);</li>
+ *   <li>{@code lineHistory}: the line source with a unit pulse over [0, 1]
+ *       ({@link LineSource2D#withRateHistory(RateHistory)}, one Duhamel window per piece);</li>
+ *   <li>{@code lineHistorySteps}: the same pulse as a user might write it, the constant source
+ *       at t minus the constant source at t − 1 (cancels once the pulse has passed).</li>
  * </ul>
  *
  * <p>Points: x uniform in [0.05, 5], y in [−1, 1], z in [−0.5, 0.5] around a source at the
@@ -57,7 +62,7 @@ public class PlumePerformance {
 
     /** What is timed. */
     @Param({"pointValue", "pointAsPatch", "pointSteady", "lineValue", "lineSteady", "lineLate",
-        "patchValue", "patchSteady", "massFlux"})
+        "patchValue", "patchSteady", "massFlux", "lineHistory", "lineHistorySteps"})
     public String impl;
 
     /** Number of points per call. */
@@ -73,6 +78,7 @@ public class PlumePerformance {
     private PointSource3D point;
     private PatchSource3D tinyPatch;
     private LineSource2D line;
+    private LineSource2D linePulse;
     private PatchSource3D patch;
     private double[] x;
     private double[] y;
@@ -87,6 +93,8 @@ public class PlumePerformance {
         final double h = 0.5e-5;
         tinyPatch = PatchSource3D.of(p, 0, -h, h, -h, h, 1.0);
         line = LineSource2D.of(p, 0, 0, 1.0);
+        linePulse = line.withRateHistory(RateHistory.of(new double[] {0, 1},
+            new double[] {1, 0}));
         patch = PatchSource3D.of(p, 0, -0.5, 0.5, -0.25, 0.25, 1.0);
         System.out.printf(Locale.ROOT, "%n[PlumePerformance] seed = %d, impl = %s, size = %d%n",
             seed, impl, size);
@@ -107,7 +115,8 @@ public class PlumePerformance {
      * Throws unless the compared implementations agree: the point source's closed form and
      * the tiny patch within 1e−6 relative (O(h²) of the patch's size) where above 1e−100;
      * the late-time line quadrature and the K₀ steady state within the quadrature's bound;
-     * batch and scalar line evaluations bit for bit.
+     * batch and scalar line evaluations bit for bit; the pulse and the difference of two
+     * constant sources within the sum of their bounds.
      */
     private void verify() {
         double worstPatch = 0;
@@ -132,6 +141,14 @@ public class PlumePerformance {
             if (!(Math.abs(e.value() - s) <= e.error() + 1e-14 * s)) {
                 throw new IllegalStateException(String.format(Locale.ROOT,
                     "line late %s vs steady %s at (%s, %s)", e, s, x[i], y[i]));
+            }
+            final Estimate pulse = linePulse.estimate(x[i], y[i], t);
+            final Estimate on = line.estimate(x[i], y[i], t);
+            final Estimate off = line.estimate(x[i], y[i], t - 1);
+            if (!(Math.abs(pulse.value() - (on.value() - off.value()))
+                    <= pulse.error() + on.error() + off.error())) {
+                throw new IllegalStateException(String.format(Locale.ROOT,
+                    "line pulse %s vs steps %s - %s at (%s, %s)", pulse, on, off, x[i], y[i]));
             }
             final Estimate at = line.estimate(x[i], y[i], t);
             if (batch[i] != at.value() || error[i] != at.error()) {
@@ -195,6 +212,14 @@ public class PlumePerformance {
             case "massFlux":
                 for (int i = 0; i < xs.length; i++) {
                     res[i] = point.massFlux(xs[i], time);
+                }
+                break;
+            case "lineHistory":
+                linePulse.value(xs, ys, time, res, null);
+                break;
+            case "lineHistorySteps":
+                for (int i = 0; i < xs.length; i++) {
+                    res[i] = line.value(xs[i], ys[i], time) - line.value(xs[i], ys[i], time - 1);
                 }
                 break;
             default:
