@@ -194,9 +194,12 @@ public final class ProfileConvolution implements Solution1D {
         if (method == null) {
             throw new IllegalArgumentException("method: must not be null");
         }
-        if (!(kernel instanceof InfiniteLineKernel)) {
+        if (!(kernel instanceof InfiniteLineKernel) && !(kernel instanceof HalfLineKernel)) {
             throw new IllegalArgumentException(
-                "kernel: the grid path needs the translation-invariant infinite-line kernel");
+                "kernel: the grid path needs the infinite-line kernel or a half-line kernel");
+        }
+        if (kernel.domain() == Domain.HALF_LINE) {
+            Checks.nonNegative("outOrigin", outOrigin);
         }
         if (!profile.isUniform()) {
             throw new IllegalArgumentException(
@@ -205,6 +208,10 @@ public final class ProfileConvolution implements Solution1D {
         if (out.length > 0) {
             Checks.finite("last output point",
                 Math.fma(out.length - 1, profile.spacing(), outOrigin));
+        }
+        if (kernel instanceof HalfLineKernel) {
+            final HalfLineKernel.Frozen s = (HalfLineKernel.Frozen) kernel.at(t);
+            return WallGridConvolution.evaluate(s, profile, outOrigin, out, method);
         }
         final InfiniteLineKernel.Frozen s = ((InfiniteLineKernel) kernel).at(t);
         return GridConvolution.evaluate(s, profile, outOrigin, out, method);

@@ -1,0 +1,244 @@
+package org.advecta.convolution;
+
+import org.advecta.special.ErrorFunctions;
+
+/**
+ * The grid path of {@link ProfileConvolution#valuesOnGrid} beside a wall at x = 0
+ * ({@link HalfLineKernel}): the free part G₀ as the discrete convolution of
+ * {@link GridConvolution}, plus the wall terms (image, and for the zero-flux wall the erfc
+ * term) summed segment by segment with {@link HalfLineKernel}'s closed forms, only for the
+ * output points and the segments where they are not negligible. In widths (X = x/L,
+ * Ξ = ξ/L, P = (vt/R)/L, Z = X + Ξ + P, y₀ = X − P):
+ * <pre>
+ * image   I·L = exp(4PX − Z²)/√π = G₀·L·e^{−4XΞ} ≤ G₀·L
+ * erfc    (v/(2D))·T·L = 2P·e^{4PX}·erfc(Z)                           (zero-flux wall)
+ * mass    ∫₀^∞ I dξ = ½e^{4PX}erfc(X + P),   ∫₀^∞ |v/(2D)|·T dξ = 2|P|·e^{4PX}·i¹erfc(X + P)
+ * </pre>
+ * <b>Which outputs.</b> The wall part at x is at most max|f|·E·(the two masses), bounded by
+ * the envelope env(X) (erfcx ≤ 1, e^{z²}i¹erfc z ≤ min(1/√π, 1/(2√π z²)) for z ≥ 0,
+ * erfc ≤ 2 and i¹erfc z ≤ 1/√π + 2|z| for z &lt; 0; A&amp;S 7.1.13, 7.2.1):
+ * <pre>
+ * P ≥ 0:           env = e^{−y₀²}·(½ + min(2P, 1/P)/√π)        (the erfc part for the zero-flux wall only)
+ * P &lt; 0, X + P ≥ 0: env = e^{−y₀²}·(½ + 2|P|/√π)
+ * P &lt; 0, X + P &lt; 0: env = e^{4PX}·(1 + 2|P|·(1/√π + 2|X + P|))
+ * </pre>
+ * Outputs with env ≤ e^{−1 − CUT²} are left at the free part (the wall changes them by less
+ * than e^{−CUT²}·max|f|·E).
+ *
+ * <p><b>Which segments.</b> The image is kept over Ξ within CUT of y₀ (I ≤ G₀: the rest holds
+ * at most erfc(CUT) of its mass) and, for P ≥ 0, Ξ ≤ Ξ_max with Z² − 4PX ≤ CUT² (the rest at
+ * most ½e^{−CUT²}), for P &lt; 0 |Z| ≤ CUT (the rest at most erfc(CUT)). For P &gt; 0 the erfc
+ * term is at most 2I pointwise (erfcx(Z) ≤ 1/(√π Z), Z ≥ P), so the same segments serve. For
+ * P &lt; 0 (zero-flux) the erfc term reaches back from Z = 0 to the wall: segments with
+ * |Z| ≤ Z_c, Z_c² = CUT² + ln max(1, 2|P|), are summed exactly; below them erfc(Z) = 2 less
+ * at most erfc(Z_c), so they enter as 2·(their trapezoid mass) from a compensated prefix sum;
+ * each side leaves out at most 2|P|·i¹erfc(Z_c) ≤ e^{−CUT²}/(2√π·CUT²) (i¹erfc z ≤
+ * e^{−z²}/(2√π z²)). The constant extensions [0, ξ₀] and [ξ_{N−1}, ∞) are always evaluated
+ * exactly. The truncation in all is below {@link #TRUNCATION}·max|f|·E.
+ *
+ * <p><b>Rounding.</b> Every kept wall term is the one {@link ProfileConvolution#value} uses, so
+ * each obeys {@link HalfLineKernel}'s per-segment contract (1e-12 + 16κ·2⁻⁵³) of |φ|-weighted
+ * ∫(G₀ + |wall terms|) ≤ max|f|·E·(1 + env), κ = 2(1 + y)(|x| + |vt/R| + |ξ|)/L, taken with
+ * y ≤ CUT + Z_c and the largest ξ in play; the sum adds (K + 8)·2⁻⁵³ of the same. The bound
+ * returned is the free part's plus the largest of these over the outputs.
+ *
+ * <p>Cost: O(N) cheap tests, plus for each of the N_w outputs the wall reaches O(K_w) segment
+ * closed forms, K_w ≈ 2·CUT·L/Δ (2·Z_c·L/Δ for the zero-flux wall with flow towards it): the
+ * wall reaches about 2·CUT·L of outputs around x = vt/R for flow away from the wall, and
+ * CUT² /(4|P|) widths (at most the whole zone 0 ≤ x ≤ |vt/R| + CUT·L) for flow towards it.
+ * Memory: one prefix array of N doubles for the zero-flux wall with flow towards it.
+ *
+ * <p>Package-private engine.
+ */
+final class WallGridConvolution {
+
+    /** The window half-width in kernel widths, as for the free part. */
+    static final double CUT = GridConvolution.CUT;
+    /** Unit roundoff 2⁻⁵³. */
+    private static final double U = 0x1.0p-53;
+    /** HalfLineKernel's per-segment relative contract (its javadoc; tested there). */
+    static final double SEGMENT_ERROR = 1e-12;
+    /** The skip threshold on ln env: −1 − CUT² (a margin of e for the envelope's rounding). */
+    private static final double SKIP = -1 - CUT * CUT;
+    /**
+     * The truncated wall mass, relative to max|f|·E, rounded up: image ≤ erfc(CUT) +
+     * ½e^{−CUT²} (twice more for the erfc term with P &gt; 0), or erfc(CUT) plus
+     * 2·e^{−CUT²}/(2√π·CUT²) with P &lt; 0; skipped outputs e^{−CUT²}.
+     */
+    static final double TRUNCATION = (3 * (ErrorFunctions.erfc(CUT) + 0.5 * Math.exp(-CUT * CUT))
+        + Math.exp(-CUT * CUT)) * 1.01;
+    private static final double ONE_OVER_SQRT_PI = SegmentIntegrals.ONE_OVER_SQRT_PI;
+
+    private WallGridConvolution() {
+    }
+
+    /**
+     * Evaluates the grid convolution beside a wall; see {@link ProfileConvolution#valuesOnGrid}.
+     *
+     * @param s the half-line kernel at t
+     * @param p uniform data, nodes ≥ 0
+     * @param outOrigin x₀ ≥ 0
+     * @param out receives the values
+     * @param method how the free part's discrete convolution is evaluated
+     * @return a bound on the absolute error of every out[i]
+     */
+    static double evaluate(HalfLineKernel.Frozen s, PiecewiseLinearProfile p, double outOrigin,
+                           double[] out, GridMethod method) {
+        final InfiniteLineKernel.Frozen free = s.free();
+        final double freeBound = GridConvolution.evaluate(free, p, outOrigin, out, method);
+        final int nOut = out.length;
+        if (s.collapsed() || nOut == 0) {
+            // the wall layer is thinner than any resolvable length (as in value)
+            return freeBound;
+        }
+        final double[] nodes = p.nodesView();
+        final double[] f = p.valuesView();
+        final int n = f.length;
+        final double step = p.spacing();
+        final double xi0 = nodes[0];
+        final double last = nodes[n - 1];
+        final double decay = s.decay();
+        final double maxAbs = p.maxAbs();
+        final boolean constant = p.extension() == PiecewiseLinearProfile.Extension.CONSTANT;
+        final boolean zeroFlux = s.zeroFlux();
+        final double pe = s.pe();
+        final double absPe = Math.abs(pe);
+        final double width = free.width();
+        // the erfc term reaches back to the wall: zero-flux wall, flow towards it
+        final boolean reachBack = zeroFlux && pe < 0;
+        final double zc = Math.sqrt(CUT * CUT + Math.log(Math.max(1.0, 2 * absPe)));
+        final double lnAway = Math.log(0.5 + (zeroFlux && pe > 0
+            ? Math.min(2 * pe, 1 / pe) * ONE_OVER_SQRT_PI : 0.0));
+        final double lnTowards = Math.log(0.5 + (zeroFlux ? 2 * absPe * ONE_OVER_SQRT_PI : 0.0));
+        final double[] prefix = reachBack ? trapezoidPrefix(f, step) : null;
+        final double lastScaled = Math.max(0.0, free.scale(last));
+        final double firstScaled = free.scale(xi0);
+        double worst = 0;
+        for (int i = 0; i < nOut; i++) {
+            final double x = Math.fma(i, step, outOrigin);
+            if (constant) {
+                // the free grid path extends f₀ down to −∞; the half-line's data stop at 0
+                out[i] -= f[0] * free.below(x, 0.0);
+            }
+            if (!zeroFlux && x == 0) {
+                // the absorbing wall: c(0, t) = 0 exactly for t > 0
+                out[i] = 0.0;
+                continue;
+            }
+            final double bigX = free.scale(x);
+            final double y0 = free.scale(free.origin(x));
+            final double z0 = bigX + pe;
+            final double lnEnv;
+            if (pe >= 0) {
+                lnEnv = -y0 * y0 + lnAway;
+            } else if (z0 >= 0) {
+                lnEnv = -y0 * y0 + lnTowards;
+            } else {
+                lnEnv = 4 * pe * bigX + Math.log1p(zeroFlux
+                    ? 2 * absPe * (ONE_OVER_SQRT_PI + 2 * -z0) : 0.0);
+            }
+            if (!(lnEnv > SKIP)) {
+                continue;
+            }
+            // the window of Ξ (in widths), widened by the positions' rounding
+            final double slack = 8 * U * (Math.abs(bigX) + absPe + firstScaled + zc + 1);
+            double lo;
+            double hi;
+            if (reachBack) {
+                lo = -z0 - zc;
+                hi = -z0 + zc;
+            } else {
+                lo = y0 - CUT;
+                hi = y0 + CUT;
+                if (pe >= 0) {
+                    // Z² − 4PX ≤ CUT² ⟺ Ξ ≤ (CUT² − y₀²)/(√(4PX + CUT²) + X + P)
+                    final double root = Math.hypot(2 * Math.sqrt(pe) * Math.sqrt(bigX), CUT);
+                    hi = Math.min(hi, (CUT * CUT - y0 * y0) / (root + bigX + pe));
+                } else {
+                    lo = Math.max(lo, -z0 - CUT);
+                    hi = Math.min(hi, -z0 + CUT);
+                }
+            }
+            lo -= slack;
+            hi += slack;
+            // segments k (over [ξ₀ + kΔ, ξ₀ + (k + 1)Δ]) meeting [L·lo, L·hi], one more each side
+            final long kLo = clamp(Math.floor((lo * width - xi0) / step) - 1, 0, n - 1);
+            final long kHi = clamp(Math.ceil((hi * width - xi0) / step) + 1, -1, n - 2);
+            double sum = 0;
+            double comp = 0;
+            for (long k = kLo; k <= kHi; k++) {
+                final int j = (int) k;
+                final double term = s.wallLinear(x, nodes[j], nodes[j + 1], f[j], f[j + 1]);
+                final double t = sum + term;
+                comp += Math.abs(sum) >= Math.abs(term) ? (sum - t) + term : (term - t) + sum;
+                sum = t;
+            }
+            final double kappa = 2 * (1 + CUT + zc)
+                * (Math.abs(bigX) + absPe + Math.max(hi, 0.0));
+            final long kept = Math.max(0, kHi - kLo + 1);
+            final double rel = SEGMENT_ERROR + (16 * kappa + kept + 8) * U;
+            double extra = 0;
+            double err;
+            if (reachBack) {
+                final double e = Math.exp(4 * pe * bigX);
+                // the kernel I + |v/(2D)|·T is positive here: the window's ∫|φ||wall| is at
+                // most max|f|·(1 + 4|P|·e^{4PX}·(the window's overlap with the data, widths))
+                final double top = constant ? hi : Math.min(hi, lastScaled);
+                final double overlap = Math.max(0.0, top - Math.max(lo, constant ? 0.0 : firstScaled));
+                err = rel * maxAbs * (1 + 4 * absPe * e * overlap);
+                if (kLo > 0) {
+                    // segments below Z = −Z_c: −(v/(2D))·∫φ·e^{vx/D}·2 dξ = (4|P|/L)·e^{4PX}·mass
+                    final double coefficient = 4 * absPe / width * e;
+                    extra += coefficient * prefix[(int) kLo];
+                    err += coefficient * maxAbs * (kLo * step) * (Math.abs(4 * pe * bigX) + 8) * U;
+                }
+                if (constant) {
+                    // positive kernel: each constant piece's ∫|φ||wall| is |its value|
+                    final double below = xi0 > 0 ? s.wallLinear(x, 0.0, xi0, f[0], f[0]) : 0.0;
+                    final double above = f[n - 1] * s.wallAbove(x, last);
+                    extra += below + above;
+                    err += (rel + 4 * U) * (Math.abs(below) + Math.abs(above));
+                }
+            } else {
+                if (constant) {
+                    if (xi0 > 0) {
+                        extra += s.wallLinear(x, 0.0, xi0, f[0], f[0]);
+                    }
+                    extra += f[n - 1] * s.wallAbove(x, last);
+                }
+                // the whole wall part's ∫|φ||wall| is at most max|f|·env
+                err = rel * maxAbs * (1 + Math.exp(lnEnv));
+            }
+            out[i] += decay * ((sum + extra) + comp);
+            worst = Math.max(worst, err);
+        }
+        final double wallBound = decay * (worst + (TRUNCATION + 8 * U) * maxAbs);
+        return freeBound + wallBound * (1 + 16 * U);
+    }
+
+    /** prefix[k] = Σ_{k′ &lt; k} Δ·(f_{k′} + f_{k′+1})/2 with Neumaier's compensated sum. */
+    private static double[] trapezoidPrefix(double[] f, double step) {
+        final double[] prefix = new double[f.length];
+        double sum = 0;
+        double comp = 0;
+        for (int k = 0; k + 1 < f.length; k++) {
+            prefix[k] = sum + comp;
+            final double term = 0.5 * step * (f[k] + f[k + 1]);
+            final double t = sum + term;
+            comp += Math.abs(sum) >= Math.abs(term) ? (sum - t) + term : (term - t) + sum;
+            sum = t;
+        }
+        prefix[f.length - 1] = sum + comp;
+        return prefix;
+    }
+
+    private static long clamp(double v, long lo, long hi) {
+        if (!(v >= lo)) {
+            return lo;
+        }
+        if (!(v <= hi)) {
+            return hi;
+        }
+        return (long) v;
+    }
+}
