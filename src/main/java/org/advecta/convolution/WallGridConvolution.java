@@ -1,6 +1,7 @@
 package org.advecta.convolution;
 
 import org.advecta.special.ErrorFunctions;
+import org.advecta.special.Exponentials;
 
 /**
  * The grid path of {@link ProfileConvolution#valuesOnGrid} beside a wall at x = 0
@@ -110,9 +111,30 @@ final class WallGridConvolution {
         final double lnAway = Math.log(0.5 + (zeroFlux && pe > 0
             ? Math.min(2 * pe, 1 / pe) * ONE_OVER_SQRT_PI : 0.0));
         final double lnTowards = Math.log(0.5 + (zeroFlux ? 2 * absPe * ONE_OVER_SQRT_PI : 0.0));
+        // the wall terms of segment k at output i depend on d = i + k (z = (x + ξ + vt/R)/L)
+        // times a factor of x alone (P < 0: e^{4PX} ≤ 1) or of ξ alone (P ≥ 0: e^{−4PΞ} ≤ 1)
+        final double h = free.scale(0.5 * step);
+        final double zBase = ((outOrigin + xi0) + free.driftHigh()) + free.driftLow();
+        final double yBase = free.origin(outOrigin) + xi0;
+        final double reachOfWindow = reachBack ? zc : CUT;
+        final double cBase = free.scale(pe >= 0 ? yBase : zBase);
+        final double slack = 8 * U * free.scale(Math.abs(outOrigin) + Math.abs(free.drift()) + xi0
+            + ((double) nOut + n) * step) + 8 * U * (zc + 1);
+        final long dMax = (long) nOut - 1 + (n - 2);
+        final long dLo = clamp(Math.floor((-reachOfWindow - slack - cBase) / (2 * h)) - 2, 0, dMax + 1);
+        final long dHi = clamp(Math.ceil((reachOfWindow + slack - cBase) / (2 * h)) + 1, -1, dMax);
+        final int kw = (int) Math.max(0, dHi - dLo + 1);
+        final double[] high = new double[kw];
+        final double[] low = new double[kw];
+        weights(s, pe, zBase, yBase, step, h, dLo, high, low);
+        // P > 0: the data carry e^{−4PΞ_k} (the left end's, for both ends of segment k)
+        final double[] g = pe > 0 && n > 1 ? new double[n - 1] : null;
+        if (g != null) {
+            for (int k = 0; k < n - 1; k++) {
+                g[k] = Math.exp(-4 * pe * free.scale(nodes[k]));
+            }
+        }
         final double[] prefix = reachBack ? trapezoidPrefix(f, step) : null;
-        final double lastScaled = Math.max(0.0, free.scale(last));
-        final double firstScaled = free.scale(xi0);
         double worst = 0;
         for (int i = 0; i < nOut; i++) {
             final double x = Math.fma(i, step, outOrigin);
@@ -140,57 +162,43 @@ final class WallGridConvolution {
             if (!(lnEnv > SKIP)) {
                 continue;
             }
-            // the window of Ξ (in widths), widened by the positions' rounding
-            final double slack = 8 * U * (Math.abs(bigX) + absPe + firstScaled + zc + 1);
-            double lo;
-            double hi;
-            if (reachBack) {
-                lo = -z0 - zc;
-                hi = -z0 + zc;
+            // segments k with d = i + k in the window
+            final long kLo = Math.max(0, dLo - i);
+            final long kHi = Math.min(n - 2L, dHi - i);
+            double sum = 0;
+            if (g != null) {
+                for (long k = kLo; k <= kHi; k++) {
+                    final int j = (int) k;
+                    final int e = (int) (i + k - dLo);
+                    sum = Math.fma(f[j + 1] * g[j], high[e], Math.fma(f[j] * g[j], low[e], sum));
+                }
             } else {
-                lo = y0 - CUT;
-                hi = y0 + CUT;
-                if (pe >= 0) {
-                    // Z² − 4PX ≤ CUT² ⟺ Ξ ≤ (CUT² − y₀²)/(√(4PX + CUT²) + X + P)
-                    final double root = Math.hypot(2 * Math.sqrt(pe) * Math.sqrt(bigX), CUT);
-                    hi = Math.min(hi, (CUT * CUT - y0 * y0) / (root + bigX + pe));
-                } else {
-                    lo = Math.max(lo, -z0 - CUT);
-                    hi = Math.min(hi, -z0 + CUT);
+                for (long k = kLo; k <= kHi; k++) {
+                    final int j = (int) k;
+                    final int e = (int) (i + k - dLo);
+                    sum = Math.fma(f[j + 1], high[e], Math.fma(f[j], low[e], sum));
                 }
             }
-            lo -= slack;
-            hi += slack;
-            // segments k (over [ξ₀ + kΔ, ξ₀ + (k + 1)Δ]) meeting [L·lo, L·hi], one more each side
-            final long kLo = clamp(Math.floor((lo * width - xi0) / step) - 1, 0, n - 1);
-            final long kHi = clamp(Math.ceil((hi * width - xi0) / step) + 1, -1, n - 2);
-            double sum = 0;
-            double comp = 0;
-            for (long k = kLo; k <= kHi; k++) {
-                final int j = (int) k;
-                final double term = s.wallLinear(x, nodes[j], nodes[j + 1], f[j], f[j + 1]);
-                final double t = sum + term;
-                comp += Math.abs(sum) >= Math.abs(term) ? (sum - t) + term : (term - t) + sum;
-                sum = t;
-            }
-            final double kappa = 2 * (1 + CUT + zc)
-                * (Math.abs(bigX) + absPe + Math.max(hi, 0.0));
+            final double alpha = pe < 0 ? Math.exp(4 * pe * bigX) : 1.0;
             final long kept = Math.max(0, kHi - kLo + 1);
-            final double rel = SEGMENT_ERROR + (16 * kappa + kept + 8) * U;
+            final double top = kept > 0 ? free.scale(nodes[(int) kHi + 1]) : 0.0;
+            final double kappa = 2 * (1 + CUT + zc) * (Math.abs(bigX) + absPe + Math.max(top, 0.0));
+            final double rel = SEGMENT_ERROR + (16 * kappa + 2 * kept + 8) * U;
+            // the factors e^{−4PΞ} (P > 0, arguments to 745) or e^{4PX} (P < 0) of the wall part
+            final double factorError = (pe > 0 ? 750 : Math.abs(4 * pe * bigX) + 2) * U;
             double extra = 0;
             double err;
             if (reachBack) {
-                final double e = Math.exp(4 * pe * bigX);
                 // the kernel I + |v/(2D)|·T is positive here: the window's ∫|φ||wall| is at
-                // most max|f|·(1 + 4|P|·e^{4PX}·(the window's overlap with the data, widths))
-                final double top = constant ? hi : Math.min(hi, lastScaled);
-                final double overlap = Math.max(0.0, top - Math.max(lo, constant ? 0.0 : firstScaled));
-                err = rel * maxAbs * (1 + 4 * absPe * e * overlap);
-                if (kLo > 0) {
+                // most max|f|·(1 + 4|P|·e^{4PX}·(the kept segments' length in widths))
+                err = rel * maxAbs * (1 + 4 * absPe * alpha * (kept * 2 * h))
+                    + factorError * maxAbs * (alpha + 4 * absPe * alpha * (kept * 2 * h));
+                final long plateau = Math.min(Math.max(0, dLo - i), n - 1L);
+                if (plateau > 0) {
                     // segments below Z = −Z_c: −(v/(2D))·∫φ·e^{vx/D}·2 dξ = (4|P|/L)·e^{4PX}·mass
-                    final double coefficient = 4 * absPe / width * e;
-                    extra += coefficient * prefix[(int) kLo];
-                    err += coefficient * maxAbs * (kLo * step) * (Math.abs(4 * pe * bigX) + 8) * U;
+                    final double coefficient = 4 * absPe / width * alpha;
+                    extra += coefficient * prefix[(int) plateau];
+                    err += coefficient * maxAbs * (plateau * step) * (Math.abs(4 * pe * bigX) + 8) * U;
                 }
                 if (constant) {
                     // positive kernel: each constant piece's ∫|φ||wall| is |its value|
@@ -207,13 +215,60 @@ final class WallGridConvolution {
                     extra += f[n - 1] * s.wallAbove(x, last);
                 }
                 // the whole wall part's ∫|φ||wall| is at most max|f|·env
-                err = rel * maxAbs * (1 + Math.exp(lnEnv));
+                final double env = Math.exp(lnEnv);
+                err = rel * maxAbs * (1 + env) + factorError * maxAbs * env;
             }
-            out[i] += decay * ((sum + extra) + comp);
+            out[i] += decay * (alpha * sum + extra);
             worst = Math.max(worst, err);
         }
         final double wallBound = decay * (worst + (TRUNCATION + 8 * U) * maxAbs);
         return freeBound + wallBound * (1 + 16 * U);
+    }
+
+    /**
+     * The wall weights of the high and low end of a segment with d = i + k, for d from dLo:
+     * for P ≥ 0 multiplied by e^{4P·S_d} (S_d = X + Ξ at the segment's low end), which with
+     * the scaling e^{z_a²} of the closed forms leaves e^{−y²}, y = S_d − P; for P &lt; 0
+     * unscaled (the output's factor e^{4PX} is applied per point).
+     */
+    private static void weights(HalfLineKernel.Frozen s, double pe, double zBase, double yBase,
+                                double step, double h, long dLo, double[] high, double[] low) {
+        final InfiniteLineKernel.Frozen free = s.free();
+        final boolean zeroFlux = s.zeroFlux();
+        final double sign = zeroFlux ? 1.0 : -1.0;
+        for (int e = 0; e < high.length; e++) {
+            final long d = dLo + e;
+            final double za = free.scale(Math.fma(d, step, zBase));
+            final double zb = free.scale(Math.fma(d + 1.0, step, zBase));
+            final double m = 0.5 * za + 0.5 * zb;
+            // the image's scaling e^{ref²} (ref the end nearest 0) and the erfc hats' e^{za²}
+            final double imageScale;
+            final double erfcScale;
+            if (pe >= 0) {
+                // za ≥ 0: both scaled by e^{za²}; e^{4P·S_d − za²} = e^{−y²}
+                imageScale = Exponentials.expMinusSquare(free.scale(Math.fma(d, step, yBase)));
+                erfcScale = imageScale;
+            } else if (za >= 0) {
+                imageScale = Exponentials.expMinusSquare(za);
+                erfcScale = imageScale;
+            } else {
+                imageScale = zb <= 0 ? Exponentials.expMinusSquare(zb) : 1.0;
+                erfcScale = 1.0;
+            }
+            double hi = 0;
+            double lo = 0;
+            if (imageScale != 0) {
+                hi = sign * imageScale * WallIntegrals.risingScaled(m, h, za, zb);
+                lo = sign * imageScale * WallIntegrals.risingScaled(-m, h, -zb, -za);
+            }
+            if (zeroFlux && pe != 0 && erfcScale != 0) {
+                // −(v/(2D))·L = −2P times the erfc hats
+                hi -= 2 * pe * erfcScale * WallIntegrals.erfcHat(za, zb, h, true);
+                lo -= 2 * pe * erfcScale * WallIntegrals.erfcHat(za, zb, h, false);
+            }
+            high[e] = hi;
+            low[e] = lo;
+        }
     }
 
     /** prefix[k] = Σ_{k′ &lt; k} Δ·(f_{k′} + f_{k′+1})/2 with Neumaier's compensated sum. */
