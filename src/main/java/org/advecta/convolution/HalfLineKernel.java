@@ -59,7 +59,7 @@ import org.advecta.transport.TransportParameters;
  * <p><b>Collapsed kernel</b> (t = 0 or 4Dt/R below 2⁻⁶⁰⁰): the free kernel's delta; the wall
  * layer (then thinner than any resolvable length) is not represented. The fast uniform-grid
  * path {@link ProfileConvolution#valuesOnGrid} takes the free part as a discrete convolution
- * and adds these wall terms, segment by segment, only where they are not negligible.
+ * and adds these wall terms as weights of the offset i + k, where they are not negligible.
  */
 public final class HalfLineKernel implements ConvolutionKernel {
 

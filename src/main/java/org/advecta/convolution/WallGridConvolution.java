@@ -6,48 +6,69 @@ import org.advecta.special.Exponentials;
 /**
  * The grid path of {@link ProfileConvolution#valuesOnGrid} beside a wall at x = 0
  * ({@link HalfLineKernel}): the free part G₀ as the discrete convolution of
- * {@link GridConvolution}, plus the wall terms (image, and for the zero-flux wall the erfc
- * term) summed segment by segment with {@link HalfLineKernel}'s closed forms, only for the
- * output points and the segments where they are not negligible. In widths (X = x/L,
- * Ξ = ξ/L, P = (vt/R)/L, Z = X + Ξ + P, y₀ = X − P):
+ * {@link GridConvolution}, plus the wall terms (the image, and for the zero-flux wall the erfc
+ * term) as a second discrete sum over the output points and segment offsets they reach. In
+ * widths (X = x/L, Ξ = ξ/L, P = (vt/R)/L, Z = X + Ξ + P, y₀ = X − P, E = e^{−μt/R}):
  * <pre>
- * image   I·L = exp(4PX − Z²)/√π = G₀·L·e^{−4XΞ} ≤ G₀·L
+ * image   I·L = exp(4PX − Z²)/√π = G₀·L·e^{−4XΞ} = exp(−(X + Ξ − P)² − 4PΞ)/√π
  * erfc    (v/(2D))·T·L = 2P·e^{4PX}·erfc(Z)                           (zero-flux wall)
  * mass    ∫₀^∞ I dξ = ½e^{4PX}erfc(X + P),   ∫₀^∞ |v/(2D)|·T dξ = 2|P|·e^{4PX}·i¹erfc(X + P)
  * </pre>
- * <b>Which outputs.</b> The wall part at x is at most max|f|·E·(the two masses), bounded by
- * the envelope env(X) (erfcx ≤ 1, e^{z²}i¹erfc z ≤ min(1/√π, 1/(2√π z²)) for z ≥ 0,
- * erfc ≤ 2 and i¹erfc z ≤ 1/√π + 2|z| for z &lt; 0; A&amp;S 7.1.13, 7.2.1):
+ *
+ * <p><b>Structure.</b> On a common spacing Δ the segment k = [ξₖ, ξₖ₊₁] seen from the output
+ * xᵢ spans Z ∈ [z_d, z_d + Δ/L], d = i + k: the hat weights of its two ends (HalfLineKernel's
+ * closed forms: Gaussian hats for the image, i¹erfc/i²erfc hats for the erfc term, see
+ * WallIntegrals) depend on d alone, times e^{4PX}, which would overflow for P &gt; 0. So
  * <pre>
- * P ≥ 0:           env = e^{−y₀²}·(½ + min(2P, 1/P)/√π)        (the erfc part for the zero-flux wall only)
- * P &lt; 0, X + P ≥ 0: env = e^{−y₀²}·(½ + 2|P|/√π)
- * P &lt; 0, X + P &lt; 0: env = e^{4PX}·(1 + 2|P|·(1/√π + 2|X + P|))
+ * P &lt; 0:  wallᵢ = e^{4PXᵢ} · Σₖ [fₖ₊₁·W⁺(i + k) + fₖ·W⁻(i + k)]             e^{4PX} ≤ 1
+ * P ≥ 0:  wallᵢ = Σₖ e^{−4PΞₖ}·[fₖ₊₁·W⁺(i + k) + fₖ·W⁻(i + k)],  W scaled by e^{4P(X + Ξₖ)}
  * </pre>
- * Outputs with env ≤ e^{−1 − CUT²} are left at the free part (the wall changes them by less
- * than e^{−CUT²}·max|f|·E).
+ * (for P ≥ 0 the closed forms come scaled by e^{z_d²}, and e^{4P(X + Ξₖ) − z_d²} = e^{−y²},
+ * y = X + Ξₖ − P: every factor is at most 1, nothing overflows at any Péclet number). The
+ * W(d) are computed once per offset (O(K) closed forms) and the sums are O(K) multiply-adds per
+ * output point reached.
  *
- * <p><b>Which segments.</b> The image is kept over Ξ within CUT of y₀ (I ≤ G₀: the rest holds
- * at most erfc(CUT) of its mass) and, for P ≥ 0, Ξ ≤ Ξ_max with Z² − 4PX ≤ CUT² (the rest at
- * most ½e^{−CUT²}), for P &lt; 0 |Z| ≤ CUT (the rest at most erfc(CUT)). For P &gt; 0 the erfc
- * term is at most 2I pointwise (erfcx(Z) ≤ 1/(√π Z), Z ≥ P), so the same segments serve. For
- * P &lt; 0 (zero-flux) the erfc term reaches back from Z = 0 to the wall: segments with
- * |Z| ≤ Z_c, Z_c² = CUT² + ln max(1, 2|P|), are summed exactly; below them erfc(Z) = 2 less
- * at most erfc(Z_c), so they enter as 2·(their trapezoid mass) from a compensated prefix sum;
- * each side leaves out at most 2|P|·i¹erfc(Z_c) ≤ e^{−CUT²}/(2√π·CUT²) (i¹erfc z ≤
- * e^{−z²}/(2√π z²)). The constant extensions [0, ξ₀] and [ξ_{N−1}, ∞) are always evaluated
- * exactly. The truncation in all is below {@link #TRUNCATION}·max|f|·E.
+ * <p><b>Which outputs.</b> The wall part at x is at most max|f|·E·(the two masses), bounded by
+ * the envelope env(X) (erfcx ≤ 1, e^{z²}i¹erfc z ≤ min(1/√π, 1/(2√π z²)) for z ≥ 0,
+ * erfc ≤ 2 and i¹erfc z ≤ 1/√π + 2|z| for z &lt; 0; A&amp;S 7.1.13, 7.2.1, the second from the
+ * first):
+ * <pre>
+ * P ≥ 0:             env = e^{−y₀²}·(½ + min(2P, 1/P)/√π)   (the erfc part for the zero-flux wall only)
+ * P &lt; 0, X + P ≥ 0:  env = e^{−y₀²}·(½ + 2|P|/√π)
+ * P &lt; 0, X + P &lt; 0:  env = e^{4PX}·(1 + 2|P|·(1/√π + 2|X + P|))
+ * </pre>
+ * Outputs with env ≤ e^{−1 − CUT²} keep the free part alone (the wall would change them by
+ * less than e^{−CUT²}·max|f|·E).
  *
- * <p><b>Rounding.</b> Every kept wall term is the one {@link ProfileConvolution#value} uses, so
- * each obeys {@link HalfLineKernel}'s per-segment contract (1e-12 + 16κ·2⁻⁵³) of |φ|-weighted
- * ∫(G₀ + |wall terms|) ≤ max|f|·E·(1 + env), κ = 2(1 + y)(|x| + |vt/R| + |ξ|)/L, taken with
- * y ≤ CUT + Z_c and the largest ξ in play; the sum adds (K + 8)·2⁻⁵³ of the same. The bound
- * returned is the free part's plus the largest of these over the outputs.
+ * <p><b>Which offsets.</b> For P ≥ 0 the offsets d with |X + Ξ − P| ≤ CUT: the image left out
+ * holds at most erfc(CUT) of the mass of exp(−(X + Ξ − P)²)/√π, and the erfc term is at most 2I
+ * pointwise (erfcx(Z) ≤ 1/(√π Z), Z ≥ P), so at most 2·erfc(CUT) more. For P &lt; 0 and the
+ * absorbing wall |Z| ≤ CUT (left out: e^{4PX}·erfc(CUT)). For P &lt; 0 and the zero-flux wall
+ * the erfc term reaches back from Z = 0 to the wall: offsets with |Z| ≤ Z_c,
+ * Z_c² = CUT² + ln max(1, 2|P|), are summed; below them erfc(Z) = 2 less at most erfc(Z_c), so
+ * those segments enter as (4|P|/L)·e^{4PX}·(their trapezoid mass) from a compensated prefix
+ * sum; each side leaves out at most 2|P|·i¹erfc(Z_c) ≤ e^{−CUT²}/(2√π·CUT²) (i¹erfc z ≤
+ * e^{−z²}/(2√π z²)). The constant extensions [0, ξ₀] and [ξ_{N−1}, ∞) are evaluated with the
+ * per-point closed forms. All truncation together is below {@link #TRUNCATION}·max|f|·E
+ * ≈ 1.6e-18·max|f|·E.
  *
- * <p>Cost: O(N) cheap tests, plus for each of the N_w outputs the wall reaches O(K_w) segment
- * closed forms, K_w ≈ 2·CUT·L/Δ (2·Z_c·L/Δ for the zero-flux wall with flow towards it): the
- * wall reaches about 2·CUT·L of outputs around x = vt/R for flow away from the wall, and
- * CUT² /(4|P|) widths (at most the whole zone 0 ≤ x ≤ |vt/R| + CUT·L) for flow towards it.
- * Memory: one prefix array of N doubles for the zero-flux wall with flow towards it.
+ * <p><b>Rounding.</b> The W(d) are HalfLineKernel's segment closed forms at arguments that
+ * differ from the per-point route's only in the rounding of the positions, so each obeys its
+ * per-segment contract, (1e-12 + 16κ·2⁻⁵³) of the |φ|-weighted ∫(G₀ + |wall terms|),
+ * κ = 2(1 + y)(|x| + |vt/R| + |ξ|)/L, here with y ≤ CUT + Z_c and ξ the largest kept node; in
+ * sum at most that times max|f|·E·(1 + env) (for the zero-flux wall with flow towards it, whose
+ * wall kernel is positive, 1 + 4|P|·e^{4PX}·(the kept length in widths), and the plateau and
+ * constant pieces by their own magnitudes). The factors e^{−4PΞ}, e^{4PX} (argument A ≤ 745
+ * where they are not negligible) add (A + 2)·2⁻⁵³ of the wall part, and the sum 2K·2⁻⁵³. The
+ * bound returned is the free part's plus E·(the largest of these over the outputs +
+ * TRUNCATION·max|f|).
+ *
+ * <p><b>Cost.</b> O(N) cheap tests (an exp and a log per output point), O(K) closed forms, and
+ * O(N_w·K) multiply-adds for the N_w outputs the wall reaches, K ≈ 2·CUT·L/Δ offsets
+ * (2·Z_c·L/Δ for the zero-flux wall with flow towards it). The wall reaches |x − vt/R| ≲ 6.6·L
+ * for flow away from it and x ≲ min(|vt/R|, 11·L²/|vt/R|) + 6.6·L for flow towards it, so
+ * N_w ≲ 14·L/Δ and the wall adds O((L/Δ)²) (at most N·K) to the free part. Memory: two arrays
+ * of K doubles, and one of N for P ≠ 0 (the data factors or the prefix sums); none per point.
  *
  * <p>Package-private engine.
  */
@@ -62,9 +83,9 @@ final class WallGridConvolution {
     /** The skip threshold on ln env: −1 − CUT² (a margin of e for the envelope's rounding). */
     private static final double SKIP = -1 - CUT * CUT;
     /**
-     * The truncated wall mass, relative to max|f|·E, rounded up: image ≤ erfc(CUT) +
-     * ½e^{−CUT²} (twice more for the erfc term with P &gt; 0), or erfc(CUT) plus
-     * 2·e^{−CUT²}/(2√π·CUT²) with P &lt; 0; skipped outputs e^{−CUT²}.
+     * The truncated wall mass, relative to max|f|·E, rounded up: at most 3·erfc(CUT) (P ≥ 0),
+     * erfc(CUT) + e^{−CUT²}/(√π·CUT²) (P &lt; 0) or e^{−CUT²} (outputs skipped); taken as
+     * 1.01·(3·(erfc(CUT) + ½e^{−CUT²}) + e^{−CUT²}).
      */
     static final double TRUNCATION = (3 * (ErrorFunctions.erfc(CUT) + 0.5 * Math.exp(-CUT * CUT))
         + Math.exp(-CUT * CUT)) * 1.01;
