@@ -195,13 +195,14 @@ public final class ProfileConvolution implements Solution1D {
      * reached, about 14·L/Δ points at most (O((L/Δ)²) in all, at most N·K). The returned bound
      * adds to the free part's: the truncation, below 1.6e-18·max|f|·e^{−μt/R}; and the rounding
      * of the wall terms by HalfLineKernel's per-segment contract, (1e-12 + 16κ·2⁻⁵³)·max|f|·
-     * e^{−μt/R}·(1 + the wall's mass envelope), κ = 2(1 + 15)(|x| + |vt/R| + |ξ|)/L at the
-     * points and nodes involved (beside a zero-flux wall with flow towards it the values near
-     * the wall grow like |vt/R|/L·∫f/L, and the bound with them). Measured: the grid agrees with
+     * e^{−μt/R}·(1 + the wall's mass envelope), κ = 2(1 + 6.5 + Z_c)(|x| + |vt/R| + |ξ|)/L at
+     * the points and nodes involved (beside a zero-flux wall with flow towards it the values
+     * near the wall grow like 4|vt/R|/L·∫f dξ/L, and the bound with them: measured up to
+     * 5.5e-6 of the largest value at |vt/R|/L = 1e8, 16κ·2⁻⁵³ with κ ∝ |vt/R|/L). Measured: the grid agrees with
      * {@link #values} within the bound for both walls and Péclet numbers |vt/R|/L to 1e8, and
-     * with the 50-digit fixtures of data at a wall to 0.0023 of it; where the difference from
-     * {@link #values} is measurable the bound exceeds it by 2e3 (median) to 2e4, the per-segment
-     * contract's 1e-12 dominating. On an absorbing wall the grid point x = 0 is exactly 0
+     * with the 50-digit fixtures of data at a wall to 0.0023 of it; elsewhere, where the
+     * difference from {@link #values} is measurable, the bound exceeds it by 3e3 (median) to
+     * 3e4, the per-segment contract's 1e-12 dominating. On an absorbing wall the grid point x = 0 is exactly 0
      * (t &gt; 0). Output points must be ≥ 0 (x₀ ≥ 0).
      *
      * @param outOrigin x₀, finite (≥ 0 on the half-line)
