@@ -153,6 +153,51 @@ class WallGridConvolutionTest {
         assertTrue(n >= 150, "rows " + n);
     }
 
+    /**
+     * Flow towards a zero-flux wall with all data far inside the distance |vt/R| carried: all
+     * the mass M has piled up in the wall layer, c(x) = E·M·(|v|/D)·e^{−|v|x/D} (the steady
+     * profile of advection against a no-flux wall, common practice; here it is the limit of
+     * the kernel when (x + ξ + vt/R)/L ≤ −Z_c for every ξ in the data and |vt/R| − ξ ≫ L, where
+     * G₀ and the image are below e^{−400} and erfc = 2 to 1e-20). An external check of the
+     * grid path at Péclet numbers to 1e8, where the fixtures do not reach.
+     */
+    @Test
+    void flowTowardsAZeroFluxWallPilesTheMassIntoTheWallLayer() {
+        final double[] f = WallGridSupport.data(new Random(SEED + 7), 80, true);
+        final PiecewiseLinearProfile prof = PiecewiseLinearProfile.uniform(0.02, DX, f,
+            PiecewiseLinearProfile.Extension.ZERO);
+        double mass = 0;
+        for (int j = 0; j + 1 < f.length; j++) {
+            mass += 0.5 * DX * (f[j] + f[j + 1]);
+        }
+        double worstRatio = 0;
+        for (double pe : new double[] {-60, -1e3, -1e8}) {
+            // L = 5Δ: the data (0.02 … 0.81) lie within 17 widths of the wall, |P| ≥ 60
+            final TransportParameters p = WallGridSupport.params(pe, 5, DX, 1.0, 1.5, 0.2);
+            final ProfileConvolution pc = ProfileConvolution.of(HalfLineKernel.of(p, Wall.ZERO_FLUX), prof);
+            for (GridMethod m : GridMethod.values()) {
+                final double[] out = new double[40];
+                final double bound = pc.valuesOnGrid(0.0, 1.0, out, m);
+                final double e = Math.exp(-0.2 * 1.0 / 1.5);
+                final double k = Math.abs(p.velocity()) / p.dispersion();
+                for (int i = 0; i < out.length; i++) {
+                    final double x = Math.fma(i, DX, 0.0);
+                    final double limit = e * mass * k * Math.exp(-k * x);
+                    final double err = Math.abs(out[i] - limit);
+                    final double tol = bound + 8 * 0x1.0p-53 * (2 + k * x) * limit;
+                    assertTrue(err <= tol, "pe=" + pe + " " + m + " i=" + i + ": " + out[i]
+                        + " vs " + limit + ", bound " + bound);
+                    if (i == 0) {
+                        worstRatio = Math.max(worstRatio, err / bound);
+                    }
+                }
+                assertTrue(out[0] > 1e3 * mass, "the pile-up: " + out[0]);
+            }
+        }
+        System.out.printf("wall grid, pile-up limit: worst error at the wall %.3g of the bound%n",
+            worstRatio);
+    }
+
     @Test
     void absorbingWallIsExactlyZeroOnTheGridPointAtTheWall() {
         final double[] f = WallGridSupport.data(new Random(SEED + 3), 120, true);
