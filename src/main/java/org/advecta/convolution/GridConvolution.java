@@ -17,6 +17,8 @@ import org.advecta.special.ErrorFunctions;
  * most erfc(6.5) ≈ 3.8e-20 of the kernel's mass, so they change cᵢ by at most
  * 3.8e-20·max|f|·e^{−μt/R}.
  *
+ * <p>Beside a wall, WallGridConvolution takes this as the free part and adds the wall terms.
+ *
  * <p>Package-private engine.
  */
 final class GridConvolution {

@@ -2,7 +2,9 @@ package org.advecta.convolution;
 
 /**
  * How {@link ProfileConvolution#valuesOnGrid} evaluates the convolution of uniform samples on
- * a uniform output grid of the same spacing.
+ * a uniform output grid of the same spacing. Beside a wall ({@link HalfLineKernel}) the method
+ * applies to the free part; the wall terms, which reach only about 14 kernel widths of
+ * outputs, are always a direct sum over the offsets within reach (see valuesOnGrid).
  */
 public enum GridMethod {
     /**

@@ -58,7 +58,8 @@ import org.advecta.transport.TransportParameters;
  *
  * <p><b>Collapsed kernel</b> (t = 0 or 4Dt/R below 2⁻⁶⁰⁰): the free kernel's delta; the wall
  * layer (then thinner than any resolvable length) is not represented. The fast uniform-grid
- * path of {@link ProfileConvolution#valuesOnGrid} is line only (not translation invariant).
+ * path {@link ProfileConvolution#valuesOnGrid} takes the free part as a discrete convolution
+ * and adds these wall terms as weights of the offset i + k, where they are not negligible.
  */
 public final class HalfLineKernel implements ConvolutionKernel {
 
@@ -115,8 +116,8 @@ public final class HalfLineKernel implements ConvolutionKernel {
         return new Frozen(new InfiniteLineKernel.Frozen(parameters, t), zeroFlux);
     }
 
-    /** The half-line kernel at one time. */
-    private static final class Frozen implements ConvolutionKernel.Snapshot {
+    /** The half-line kernel at one time (package-private for the grid path, WallGridConvolution). */
+    static final class Frozen implements ConvolutionKernel.Snapshot {
 
         private final InfiniteLineKernel.Frozen free;
         private final boolean zeroFlux;
@@ -149,6 +150,21 @@ public final class HalfLineKernel implements ConvolutionKernel {
         @Override
         public boolean collapsed() {
             return collapsed;
+        }
+
+        /** The free kernel G₀ (with E) at the same time. */
+        InfiniteLineKernel.Frozen free() {
+            return free;
+        }
+
+        /** True for the zero-flux wall. */
+        boolean zeroFlux() {
+            return zeroFlux;
+        }
+
+        /** P = (vt/R)/L, the drift in widths. */
+        double pe() {
+            return pe;
         }
 
         @Override
@@ -360,7 +376,8 @@ public final class HalfLineKernel implements ConvolutionKernel {
             return f + decay * wallLinear(x, a, b, fa, fb);
         }
 
-        private double wallLinear(double x, double a, double b, double fa, double fb) {
+        /** The wall terms of {@link #linear}, without E. */
+        double wallLinear(double x, double a, double b, double fa, double fb) {
             final double img = imageLinear(x, a, b, fa, fb);
             if (!zeroFlux) {
                 return -img;
@@ -404,6 +421,15 @@ public final class HalfLineKernel implements ConvolutionKernel {
                 return f - decay * img;
             }
             return f + decay * (img - halfVOverD() * erfcTail(x, b));
+        }
+
+        /** The wall terms of {@link #above}, without E (the kernel not collapsed). */
+        double wallAbove(double x, double b) {
+            final double img = imageTail(x, b);
+            if (!zeroFlux) {
+                return -img;
+            }
+            return img - halfVOverD() * erfcTail(x, b);
         }
 
         @Override

@@ -25,6 +25,7 @@
  * <p>The kernel is pluggable ({@link org.advecta.convolution.ConvolutionKernel}):
  * {@link org.advecta.convolution.HalfLineKernel} is the half-line x ≥ 0 with an absorbing or
  * zero-flux wall at x = 0 (free kernel plus images, closed-form segment integrals), and
- * routes 1 and 2 work on it unchanged; route 3 (the uniform grid) is line only.
+ * routes 1 and 2 work on it unchanged; route 3 (the uniform grid) takes the free part as
+ * on the line and adds the wall terms as weights of the offset between output and node.
  */
 package org.advecta.convolution;
