@@ -38,8 +38,17 @@ import org.advecta.transport.TransportParameters;
  * over τ ∈ [t − t_(k+1), t − t_k], normalised at its end nearest the peak (or at the peak
  * inside it), cut and bounded likewise (a window end inside the cut needs no tail), with its
  * ends kept to a few units of rounding of the window's own width (the differences t − t_k
- * are formed exactly). The steady state uses {@link ModifiedBessel#k0Scaled(double)} and
- * exists only when U &gt; 0 (v ≠ 0 or μ &gt; 0).
+ * are formed exactly). Beside an absorbing wall y = y_w the image's kernel differs from the
+ * free one only in the transverse distance, (2y_w − y − y₀)² − (y − y₀)² = 4(y − y_w)(y₀ − y_w),
+ * so the difference of the two is integrated as one non-negative integrand,
+ * <pre>
+ * g_free(τ) − g_image(τ) = g_free(τ)·(−expm1(−c/τ)),   c = R(y − y_w)(y₀ − y_w)/D_T ≥ 0,
+ * </pre>
+ * with no cancellation near the wall (where c/τ is small) or late (the method of images,
+ * Carslaw &amp; Jaeger 1959, §10.10; the factorisation is exact algebra); the tails' bounds carry
+ * the factor too (at most γe^(−w) on the left, γ = c/τ_n, and its value at the cut on the
+ * right). A reflecting wall adds its image's integral. The steady state uses
+ * {@link ModifiedBessel#k0Scaled(double)} and exists only when U &gt; 0 (v ≠ 0 or μ &gt; 0).
  *
  * <p><b>Mass flux</b> through the line x = X (per unit depth): the closed form of
  * {@link PointSource3D#massFlux(double, double)}, which it shares; beside an absorbing wall,
@@ -54,11 +63,16 @@ import org.advecta.transport.TransportParameters;
  * rates are all ≥ 0 the same holds: its windows' integrands are ≥ 0, so the bound is at most
  * 1e-10 relative to the result itself, also long after a release has ended (checked against
  * mpmath on pulses); with a negative rate it is relative to Σ|q_k|·(window) instead. Beside
- * a wall the bound is the sum of the images' bounds, which may exceed 1e-10 of a result that
- * is their difference (an absorbing wall). {@link #steadyValue(double, double)} and the mass fluxes: within
- * max(16, 2κ) ULP wherever the result is a normal double, for a constant rate without
- * absorbing walls; beside one, within the bound {@link #massFluxEstimate} returns (at most
- * 1e-10 relative for a constant rate).
+ * an absorbing wall the same holds, relative to the (small) result itself: the bound is at
+ * most 1e-10 relative also at 1e-6 of the source–wall distance from the wall, late and with
+ * decay (checked against mpmath, where it is below 3e-13 and errors below 1e-13; before,
+ * the difference of the separately integrated terms had bounds of up to 4e-8 there), and
+ * the value on the wall is exactly 0. Beside a reflecting wall the bound is the sum of the
+ * two terms' bounds (no cancellation). {@link #steadyValue(double, double)} and the mass
+ * fluxes: within max(16, 2κ) ULP wherever the result is a normal double, for a constant rate
+ * without absorbing walls (beside one, the steady state superposes its two K₀ terms, κ
+ * including their cancellation); beside one, the mass fluxes within the bound
+ * {@link #massFluxEstimate} returns (at most 1e-10 relative for a constant rate).
  *
  * <p><b>Domain.</b> Coordinates finite; t finite and ≥ 0; the source line itself is excluded
  * (c is infinite there); with a wall (across y), points on the source's side.
@@ -124,7 +138,10 @@ public final class LineSource2D {
     }
 
     /**
-     * Returns this source beside a wall y = y_w parallel to the flow (method of images).
+     * Returns this source beside a wall y = y_w parallel to the flow (method of images; beside
+     * an absorbing wall the free term minus its image is integrated as one non-negative
+     * integrand, so that {@link #estimate}'s bound stays relative to the result near the
+     * wall).
      *
      * @param wall the wall, across y; the source must lie strictly on one side of it
      * @return the new source

@@ -341,6 +341,12 @@ public final class PatchSource3D {
         private double tauC;
         private double yy;
         private double zz;
+        /** Whether the images are combined inside the integrand (an absorbing wall). */
+        private boolean combined;
+        /** A wall factor and its cancellation ratio ({@link WallStrips}). */
+        private final double[] strip = new double[2];
+        /** The largest summed cancellation ratio of the walls' factors in this integral. */
+        private double kappa;
         double value;
         double error;
 
@@ -348,11 +354,65 @@ public final class PatchSource3D {
         public double at(double w) {
             final double tau = tauC * Math.exp(w);
             final double e = -0.5 * w + alpha * Math.expm1(-w) + beta * Math.expm1(w);
-            final double sy = scaledStrip(yy, y1, y2,
-                Math.sqrt(4 * flow.dT * tau / flow.retardation));
-            final double sz = scaledStrip(zz, z1, z2,
-                Math.sqrt(4 * flow.dV * tau / flow.retardation));
-            return Math.exp(-e) * sy * sz;
+            final double wy = Math.sqrt(4 * flow.dT * tau / flow.retardation);
+            final double wz = Math.sqrt(4 * flow.dV * tau / flow.retardation);
+            if (!combined) {
+                return Math.exp(-e) * scaledStrip(yy, y1, y2, wy) * scaledStrip(zz, z1, z2, wz);
+            }
+            final double sy = factor(images.wallY, images.sideY, yy, y1, y2, wy);
+            final double k = strip[1];
+            final double sz = factor(images.wallZ, images.sideZ, zz, z1, z2, wz);
+            final double g = Math.exp(-e) * sy * sz;
+            if (g > 0) {
+                // relative rounding: each factor's difference within 16·2⁻⁵³ times its ratio
+                kappa = Math.max(kappa, k + strip[1]);
+            }
+            return g;
+        }
+
+        /** The smallest coefficient c of the absorbing factors' bounds c·e^(−w/2). */
+        private double leftFactor() {
+            double c = 1;
+            final double wy = Math.sqrt(4 * flow.dT * tauC / flow.retardation);
+            final double wz = Math.sqrt(4 * flow.dV * tauC / flow.retardation);
+            if (images.wallY != null && images.wallY.isAbsorbing()) {
+                c = Math.min(c, WallStrips.bound(yy, y1, y2, wy, images.wallY.position(),
+                    images.sideY, true));
+            }
+            if (images.wallZ != null && images.wallZ.isAbsorbing()) {
+                c = Math.min(c, WallStrips.bound(zz, z1, z2, wz, images.wallZ.position(),
+                    images.sideZ, true));
+            }
+            return c;
+        }
+
+        /** The product of the absorbing factors' bounds at w (each ≤ 1, non-increasing). */
+        private double rightFactor(double w) {
+            final double tau = tauC * Math.exp(w);
+            double f = 1;
+            if (images.wallY != null && images.wallY.isAbsorbing()) {
+                f *= WallStrips.bound(yy, y1, y2, Math.sqrt(4 * flow.dT * tau / flow.retardation),
+                    images.wallY.position(), images.sideY, false);
+            }
+            if (images.wallZ != null && images.wallZ.isAbsorbing()) {
+                f *= WallStrips.bound(zz, z1, z2, Math.sqrt(4 * flow.dV * tau / flow.retardation),
+                    images.wallZ.position(), images.sideZ, false);
+            }
+            return f;
+        }
+
+        /** One axis's strip factor with its wall's image inside (scaled as scaledStrip). */
+        private double factor(Wall wall, int side, double c, double lo, double hi, double w) {
+            if (wall == null) {
+                strip[1] = 0;
+                return scaledStrip(c, lo, hi, w);
+            }
+            if (wall.isAbsorbing()) {
+                WallStrips.absorbing(c, lo, hi, w, wall.position(), side, strip);
+            } else {
+                WallStrips.reflecting(c, lo, hi, w, wall.position(), strip);
+            }
+            return strip[0];
         }
 
         /**
@@ -364,7 +424,12 @@ public final class PatchSource3D {
         void evaluate(double x, double y, double z, double t) {
             double v = 0;
             double err = 0;
-            for (int i = 0; i < images.count(); i++) {
+            // beside an absorbing wall: one integral of the free term minus its images, each
+            // axis's strip factor formed with its image inside (WallStrips), so that the bound
+            // is relative to the result; else the sum over the images
+            combined = images.absorbing();
+            final int terms = combined ? 1 : images.count();
+            for (int i = 0; i < terms; i++) {
                 yy = images.y(i, y);
                 zz = images.z(i, z);
                 if (t == Double.POSITIVE_INFINITY) {
@@ -432,9 +497,16 @@ public final class PatchSource3D {
             final double wB = window.wB;
             // left cut: E(w) ≥ |w|/2 − β and E(w) ≥ α(e^|w| − 1) − β; an end inside a cut
             // needs no tail
-            final double lo = -Math.min(2 * (CUT + beta),
-                alpha > 0 ? Math.log1p((CUT + beta) / alpha) : Double.POSITIVE_INFINITY);
+            final double alphaCut = alpha > 0 ? Math.log1p((CUT + beta) / alpha)
+                : Double.POSITIVE_INFINITY;
+            final double lo = -Math.min(2 * (CUT + beta), alphaCut);
             double tail = wA <= lo ? 2 * TAIL : 0;
+            if (combined && tail > 0 && alphaCut <= 2 * (CUT + beta)) {
+                // an absorbing factor is at most c·e^(−w/2) (WallStrips.bound, c at τ_c), and
+                // e^(−E) ≤ e^(w/2 + β − α(e^(−w) − 1)): the left tail is at most
+                // c·e^(−CUT)/(α + CUT + β), relative to the (small) result near the wall
+                tail = Math.min(tail, leftFactor() * TAIL / (alpha + CUT + beta));
+            }
             double hi = wB;
             if (wB > 0) {
                 // right cut: β(e^w − 1) − w/2 − α ≥ CUT, by fixed-point iteration plus a margin
@@ -445,9 +517,12 @@ public final class PatchSource3D {
                 final double cut = Math.log1p((CUT + alpha + 0.5 * w + 1) / beta);
                 if (cut < wB) {
                     hi = cut;
-                    tail += TAIL / (CUT + 0.5);
+                    // beyond the cut the absorbing factors are at most their bound there
+                    // (non-increasing in τ)
+                    tail += TAIL / (CUT + 0.5) * (combined ? rightFactor(cut) : 1.0);
                 }
             }
+            kappa = 0;
             quadrature.integrate(this, Math.max(lo, wA), hi, 0.0);
             // the ends' rounding (an end beyond a cut is covered by the tail bound)
             final double ends = window.endError(wA > lo ? at(wA) : 0.0,
@@ -464,7 +539,7 @@ public final class PatchSource3D {
             error = value == 0 ? scale * (quadrature.error() + tail + ends)
                 : scale * (quadrature.error() + tail + ends) + Math.abs(value)
                     * LineSource2D.ROUNDING * (16 + 8 * (xi * xi - shift)
-                        + 8 * Math.sqrt(CUT * (alpha + beta)));
+                        + 8 * Math.sqrt(CUT * (alpha + beta)) + 16 * kappa);
         }
     }
 }

@@ -10,11 +10,11 @@ import org.advecta.quadrature.Estimate;
 import org.advecta.transport.TransportParameters;
 
 /**
- * The line source beside an absorbing wall (method of images, evaluated as one integral of
- * the kernel difference): non-negative and at most the free value, exactly 0 on the wall,
- * equal to the free source minus its image within the bounds, equal to the free value when
- * the wall is far, and the issue's bound of 1e-10 relative at random points near the wall
- * (from 1e-9 to 1/2 of the source–wall distance), also for a pulse.
+ * The line and patch sources beside absorbing walls (method of images, evaluated as one
+ * integral of the kernel difference): non-negative and at most the free value, exactly 0 on
+ * the wall, equal to the free source minus its image(s) within the bounds, equal to the free
+ * value when the wall is far, and the issue's bound of 1e-10 relative at random points near
+ * the wall (from 1e-9 to 1/2 of the source–wall distance), also for a pulse.
  */
 class PlumeWallProperties {
 
@@ -117,5 +117,69 @@ class PlumeWallProperties {
         assertTrue(c.value() <= f.value() + f.error() + c.error(), "at most free" + where);
         assertTrue(c.value() >= (1 - 5e-18) * f.value() - f.error() - c.error(),
             "within e^-40 of the free value" + where);
+    }
+
+    @Property(tries = 200)
+    void patchNearTheWalls(
+            @ForAll @DoubleRange(min = -2, max = 5) double v,
+            @ForAll @DoubleRange(min = -1.5, max = 0.5) double logDL,
+            @ForAll @DoubleRange(min = 1, max = 4) double r,
+            @ForAll @DoubleRange(min = 0, max = 0.2) double mu,
+            @ForAll @DoubleRange(min = 0.1, max = 3) double gapY,
+            @ForAll @DoubleRange(min = 0.1, max = 2) double gapZ,
+            @ForAll @DoubleRange(min = -9, max = 0.5) double logY,
+            @ForAll @DoubleRange(min = -9, max = 0.5) double logZ,
+            @ForAll @DoubleRange(min = -3, max = 8) double x,
+            @ForAll @DoubleRange(min = -2, max = 3) double logT,
+            @ForAll boolean zWall,
+            @ForAll boolean zReflecting,
+            @ForAll boolean pulse) {
+        final TransportParameters p = params(v, logDL, 0.1, r, mu);
+        // the patch [−1, 1] × [−0.5, 0.5]; walls below it at gaps gapY and gapZ; the point at
+        // 10^logY (10^logZ) of the gap from each wall (beyond the strip for the largest)
+        final double wallY = -1 - gapY;
+        final double wallZ = -0.5 - gapZ;
+        final double y = wallY + Math.pow(10, logY) * gapY;
+        final double z = zWall ? wallZ + Math.pow(10, logZ) * gapZ : 0.1;
+        final double t = Math.pow(10, logT);
+        final PatchSource3D free = PatchSource3D.of(p, 0, -1, 1, -0.5, 0.5, 1)
+            .withRateHistory(rates(pulse));
+        PatchSource3D walled = free.withWall(Wall.absorbing(Wall.Axis.Y, wallY));
+        if (zWall) {
+            walled = walled.withWall(zReflecting ? Wall.reflecting(Wall.Axis.Z, wallZ)
+                : Wall.absorbing(Wall.Axis.Z, wallZ));
+        }
+        final Estimate c = walled.estimate(x, y, z, t);
+        final Estimate f = free.estimate(x, y, z, t);
+        // the superposition of the free term and its images, signed (each a free evaluation)
+        double sum = f.value();
+        double sumError = f.error();
+        double scale = Math.abs(f.value());
+        final double[][] images = zWall
+            ? new double[][] {{2 * wallY - y, z, -1}, {y, 2 * wallZ - z, zReflecting ? 1 : -1},
+                {2 * wallY - y, 2 * wallZ - z, zReflecting ? -1 : 1}}
+            : new double[][] {{2 * wallY - y, z, -1}};
+        for (double[] im : images) {
+            final Estimate g = free.estimate(x, im[0], im[1], t);
+            sum += im[2] * g.value();
+            sumError += g.error();
+            scale += Math.abs(g.value());
+        }
+        final String where = " at v=" + v + " logDL=" + logDL + " R=" + r + " mu=" + mu
+            + " walls y=" + wallY + (zWall ? (zReflecting ? " z(refl)=" : " z=") + wallZ : "")
+            + " (x, y, z, t)=(" + x + ", " + y + ", " + z + ", " + t + ") pulse=" + pulse
+            + ": " + c + " free " + f + " superposed " + sum;
+        assertTrue(c.value() >= 0, "non-negative" + where);
+        if (!(zWall && zReflecting)) {
+            assertTrue(c.value() <= f.value() + f.error() + c.error(), "at most free" + where);
+        }
+        assertTrue(Math.abs(c.value() - sum) <= c.error() + sumError + 4 * Math.ulp(scale),
+            "the superposed images" + where);
+        if (c.value() >= JUDGED) {
+            assertTrue(c.relativeError() <= MAX_RELATIVE_ESTIMATE,
+                "bound " + c.relativeError() + where);
+        }
+        final Estimate onWall = walled.estimate(x, wallY, z, t);
+        assertEquals(0.0, onWall.value(), "on the wall" + where);
     }
 }
