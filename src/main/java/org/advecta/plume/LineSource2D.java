@@ -38,8 +38,17 @@ import org.advecta.transport.TransportParameters;
  * over τ ∈ [t − t_(k+1), t − t_k], normalised at its end nearest the peak (or at the peak
  * inside it), cut and bounded likewise (a window end inside the cut needs no tail), with its
  * ends kept to a few units of rounding of the window's own width (the differences t − t_k
- * are formed exactly). The steady state uses {@link ModifiedBessel#k0Scaled(double)} and
- * exists only when U &gt; 0 (v ≠ 0 or μ &gt; 0).
+ * are formed exactly). Beside an absorbing wall y = y_w the image's kernel differs from the
+ * free one only in the transverse distance, (2y_w − y − y₀)² − (y − y₀)² = 4(y − y_w)(y₀ − y_w),
+ * so the difference of the two is integrated as one non-negative integrand,
+ * <pre>
+ * g_free(τ) − g_image(τ) = g_free(τ)·(−expm1(−c/τ)),   c = R(y − y_w)(y₀ − y_w)/D_T ≥ 0,
+ * </pre>
+ * with no cancellation near the wall (where c/τ is small) or late (the method of images,
+ * Carslaw &amp; Jaeger 1959, §10.10; the factorisation is exact algebra); the tails' bounds carry
+ * the factor too (at most γe^(−w) on the left, γ = c/τ_n, and its value at the cut on the
+ * right). A reflecting wall adds its image's integral. The steady state uses
+ * {@link ModifiedBessel#k0Scaled(double)} and exists only when U &gt; 0 (v ≠ 0 or μ &gt; 0).
  *
  * <p><b>Mass flux</b> through the line x = X (per unit depth): the closed form of
  * {@link PointSource3D#massFlux(double, double)}, which it shares; beside an absorbing wall,
@@ -54,11 +63,16 @@ import org.advecta.transport.TransportParameters;
  * rates are all ≥ 0 the same holds: its windows' integrands are ≥ 0, so the bound is at most
  * 1e-10 relative to the result itself, also long after a release has ended (checked against
  * mpmath on pulses); with a negative rate it is relative to Σ|q_k|·(window) instead. Beside
- * a wall the bound is the sum of the images' bounds, which may exceed 1e-10 of a result that
- * is their difference (an absorbing wall). {@link #steadyValue(double, double)} and the mass fluxes: within
- * max(16, 2κ) ULP wherever the result is a normal double, for a constant rate without
- * absorbing walls; beside one, within the bound {@link #massFluxEstimate} returns (at most
- * 1e-10 relative for a constant rate).
+ * an absorbing wall the same holds, relative to the (small) result itself: the bound is at
+ * most 1e-10 relative also at 1e-6 of the source–wall distance from the wall, late and with
+ * decay (checked against mpmath, where it is below 3e-13 and errors below 1e-13; before,
+ * the difference of the separately integrated terms had bounds of up to 4e-8 there), and
+ * the value on the wall is exactly 0. Beside a reflecting wall the bound is the sum of the
+ * two terms' bounds (no cancellation). {@link #steadyValue(double, double)} and the mass
+ * fluxes: within max(16, 2κ) ULP wherever the result is a normal double, for a constant rate
+ * without absorbing walls (beside one, the steady state superposes its two K₀ terms, κ
+ * including their cancellation); beside one, the mass fluxes within the bound
+ * {@link #massFluxEstimate} returns (at most 1e-10 relative for a constant rate).
  *
  * <p><b>Domain.</b> Coordinates finite; t finite and ≥ 0; the source line itself is excluded
  * (c is infinite there); with a wall (across y), points on the source's side.
@@ -124,7 +138,10 @@ public final class LineSource2D {
     }
 
     /**
-     * Returns this source beside a wall y = y_w parallel to the flow (method of images).
+     * Returns this source beside a wall y = y_w parallel to the flow (method of images; beside
+     * an absorbing wall the free term minus its image is integrated as one non-negative
+     * integrand, so that {@link #estimate}'s bound stays relative to the result near the
+     * wall).
      *
      * @param wall the wall, across y; the source must lie strictly on one side of it
      * @return the new source
@@ -317,6 +334,11 @@ public final class LineSource2D {
         private final TimeWindow window = new TimeWindow();
         private double alpha;
         private double beta;
+        /** Whether the absorbing wall's factor multiplies the integrand. */
+        private boolean absorbing;
+        /** c = R(y − y_w)(y₀ − y_w)/D_T ≥ 0, and γ = c/τ_n for the current window. */
+        private double wallC;
+        private double gamma;
         double value;
         double error;
 
@@ -327,10 +349,25 @@ public final class LineSource2D {
             // both terms are ≥ 0, since α ≥ β for a window before the peak (normalised at its
             // upper end, w ≤ 0), α ≤ β for one after it (w ≥ 0) and α = β at the peak
             if (w == 0) {
-                return 1.0;    // exactly, also where 2(α + β) overflows
+                // exactly 1, also where 2(α + β) overflows
+                return absorbing ? wallFactor(0.0) : 1.0;
             }
             final double h = Math.sinh(0.5 * w);
-            return Math.exp(-(2 * (alpha + beta) * h * h - (alpha - beta) * Math.sinh(w)));
+            final double g =
+                Math.exp(-(2 * (alpha + beta) * h * h - (alpha - beta) * Math.sinh(w)));
+            return absorbing ? g * wallFactor(w) : g;
+        }
+
+        /**
+         * 1 − g_image/g_free = −expm1(−γ e^(−w)) ∈ [0, 1] at τ = τ_n e^w, γ = c/τ_n: the
+         * absorbing wall's image differs from the free kernel only in the transverse distance,
+         * (y' − y₀)² − (y − y₀)² = 4(y − y_w)(y₀ − y_w) with y' = 2y_w − y, so
+         * g_image/g_free = exp(−R(y − y_w)(y₀ − y_w)/(D_T τ)) = exp(−c/τ) (method of images,
+         * Carslaw &amp; Jaeger 1959, §10.10; the ratio is exact algebra).
+         */
+        private double wallFactor(double w) {
+            // exactly 0 on the wall (γ = 0), also where e^(−w) overflows
+            return gamma == 0 ? 0.0 : -Math.expm1(-gamma * Math.exp(-w));
         }
 
         /**
@@ -342,7 +379,16 @@ public final class LineSource2D {
         void evaluate(double x, double y, double t) {
             double v = 0;
             double err = 0;
-            for (int i = 0; i < images.count(); i++) {
+            // beside an absorbing wall: one integral of g_free − g_image = g_free·(1 − e^(−c/τ)),
+            // non-negative, so that its bound is relative to the result (the difference of the
+            // two integrated terms cancels near the wall); else the sum over the images
+            absorbing = images.absorbing();
+            if (absorbing) {
+                final double yw = images.wallY.position();
+                wallC = flow.retardation * ((y - yw) * (y0 - yw)) / flow.dT;
+            }
+            final int terms = absorbing ? 1 : images.count();
+            for (int i = 0; i < terms; i++) {
                 final double dx = x - x0;
                 final double dy = (images.y(i, y) - y0) * flow.stretchY;
                 final double rho2 = dy * dy;
@@ -392,7 +438,9 @@ public final class LineSource2D {
                 alpha = r * flow.u / (4 * flow.dL);
                 beta = alpha;
                 shift = 0;
+                gamma = absorbing ? wallC * flow.u / rr : 0.0;
             } else {
+                gamma = absorbing ? wallC / tn : 0.0;
                 // normalise at τ_n, where the exponent is s − A², A = (R r − Uτ_n)/√(4D_L R τ_n)
                 final double ut = flow.u * tn;
                 final double root = 2 * Math.sqrt(flow.dL * flow.retardation) * Math.sqrt(tn);
@@ -416,9 +464,20 @@ public final class LineSource2D {
             final double wB = window.wB;
             final double hi = Math.min(wB, hiCut);
             final double oneTail = TAIL / (alpha + beta + CUT);
-            double tail = wA <= lo ? oneTail : 0;
-            if (hi < wB) {
-                tail += oneTail;
+            double tail;
+            if (!absorbing) {
+                tail = wA <= lo ? oneTail : 0;
+                if (hi < wB) {
+                    tail += oneTail;
+                }
+            } else {
+                // with the wall's factor f ≤ min(1, γe^(−w)): on the left, E(w) ≥ α(e^(−w) − 1) − β
+                // gives ∫ e^(−E)·γe^(−w) dw ≤ γ e^(−CUT)/α; on the right f is decreasing, at most
+                // its value at the cut; both stay relative to the (small) result near the wall
+                tail = wA <= lo && gamma > 0 ? Math.min(oneTail, gamma * (TAIL / alpha)) : 0;
+                if (hi < wB) {
+                    tail += oneTail * wallFactor(hi);
+                }
             }
             quadrature.integrate(this, Math.max(lo, wA), hi, 0.0);
             // the ends' rounding (an end beyond a cut is covered by the tail bound)
@@ -428,9 +487,11 @@ public final class LineSource2D {
             value = scale * quadrature.value();
             // quadrature, tails and ends, plus the rounding of the exponent s − A², whose terms
             // are formed from rounded inputs (relative 8·2⁻⁵³ per unit of |s| + A², as κ says)
+            // (and, beside an absorbing wall, of c, γ and the factor: 8·2⁻⁵³ more)
             error = value == 0 ? scale * (quadrature.error() + tail + ends)
                 : scale * (quadrature.error() + tail + ends)
-                    + Math.abs(value) * ROUNDING * (16 + 8 * (Math.abs(s) + shift * shift));
+                    + Math.abs(value) * ROUNDING * ((absorbing ? 24 : 16)
+                        + 8 * (Math.abs(s) + shift * shift));
         }
     }
 }

@@ -15,8 +15,19 @@ import org.advecta.internal.Checks;
  * c(x, y, z) = c∞(x, y, z) ± c∞(x, 2y_w − y, z)      (+ reflecting, − absorbing)
  * </pre>
  * with c∞ the free-space solution. The domain is the side of the wall that holds the source.
- * Near an absorbing wall the two terms nearly cancel; the result is then accurate to about
- * 2⁻⁵³ × c∞ in absolute terms, not relative to its own (small) size.
+ * Near an absorbing wall (and far from the source compared with its distance from the wall)
+ * the two terms nearly cancel. The quadrature-based sources therefore form the difference
+ * inside their time integrals: {@link LineSource2D} integrates the free kernel times
+ * 1 − e^(−c/τ) = −expm1(−c/τ), c = R(y − y_w)(y₀ − y_w)/D_T ≥ 0 (the image's kernel differs
+ * from the free one only in the transverse distance); {@link PatchSource3D} forms each strip
+ * factor minus its mirror from the Gaussian masses H(a) = erf((a + Y)/w) − erf((a − Y)/w)
+ * over the strip's distances a from the wall. Their returned bounds are then relative to the
+ * result itself (at most 1e-10 at default settings, checked against mpmath down to 1e-6 of
+ * the source–wall distance). The closed forms (the point source's values, the line source's
+ * steady state) still superpose the terms: beside an absorbing wall they are accurate to
+ * about 2⁻⁵³ × c∞ in absolute terms, not relative to their own (small) size. (The mass
+ * fluxes beside an absorbing wall are quadratures with the factor erf(a/√(4D_Tτ/R)), see
+ * {@link PointSource3D#massFluxEstimate(double, double)}.)
  */
 public final class Wall {
 

@@ -17,7 +17,11 @@
  *
  * <p>Common to all sources: a {@link org.advecta.plume.RateHistory} (piecewise-constant rate,
  * Duhamel's theorem) and {@link org.advecta.plume.Wall}s parallel to the flow (method of
- * images). The rate q is the source's mass rate divided by whatever converts mass into the
+ * images). Beside an absorbing wall the quadrature-based sources integrate the free kernel
+ * minus its image as one non-negative integrand (the line source's factor −expm1(−c/τ), the
+ * patch's strip minus its mirror), so that their bounds stay within 1e-10 of the result near
+ * the wall; the closed forms superpose the image (accurate relative to the free term there).
+ * The rate q is the source's mass rate divided by whatever converts mass into the
  * concentration's units (the porosity, for a concentration per volume of water); it is the
  * growth rate of ∫ R c dV without decay, and at steady state without decay the mass flux
  * through any plane downstream equals it.
