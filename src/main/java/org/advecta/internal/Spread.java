@@ -59,6 +59,45 @@ public final class Spread {
     }
 
     /**
+     * Returns a spread that carries only 1/L = √(R/(4Dt)), for solutions that need nothing
+     * else (the step and the slug on the line: erfc and erf differences of scaled distances).
+     * Building the full spread costs those solutions about a tenth of their time, measured
+     * by interleaved timing against the plain formula; this one costs one multiplication, one
+     * division and one square root. 1/L is within 1 ulp (4Dt rounded once, R/(4Dt) once, the
+     * square root once), as for {@link #of}, though not always the same double. Its exponent
+     * parts and normalisation are NaN, so that a use of them shows.
+     *
+     * @param d dispersion coefficient, &gt; 0
+     * @param r retardation factor, ≥ 1
+     * @param t time, &gt; 0
+     * @return the spread
+     */
+    public static Spread ofInverseLength(double d, double r, double t) {
+        return new Spread(inverseLength(d, r, t));
+    }
+
+    /**
+     * Returns 1/L = √(R/(4Dt)) within 1 ulp, without building a spread: the value
+     * {@link #ofInverseLength} holds, bit for bit.
+     *
+     * @param d dispersion coefficient, &gt; 0
+     * @param r retardation factor, ≥ 1
+     * @param t time, &gt; 0
+     * @return the inverse length
+     */
+    public static double inverseLength(double d, double r, double t) {
+        return Math.sqrt(r / (4 * d * t));
+    }
+
+    private Spread(double inverseLength) {
+        this.high = Double.NaN;
+        this.low = Double.NaN;
+        this.norm = Double.NaN;
+        this.collapsed = !(inverseLength <= 1 / Math.sqrt(COLLAPSE));
+        this.inverseLength = inverseLength;
+    }
+
+    /**
      * R/(p + pLow) in double-double, with one division and one square root (every solution
      * evaluation builds one): h = R·(1/p) need not be correctly rounded, because the fma
      * remainder R − h·p is exact for any h near R/p and carries the rest into the low part.

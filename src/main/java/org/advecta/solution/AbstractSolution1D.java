@@ -120,14 +120,15 @@ abstract class AbstractSolution1D implements Solution1D {
     }
 
     /**
-     * Returns what {@link #valueAt(double, double, Spread)} needs of the time t &gt; 0: the
-     * spread with this solution's D and R, or null where no spread is used.
+     * Returns what {@link #valueAt(double, double, Spread)} needs of the time t &gt; 0: by
+     * default the inverse length 1/L with this solution's D and R (all that the erfc-based
+     * families use; see {@link Spread#ofInverseLength}), or null where no spread is used.
      *
      * @param t time, &gt; 0
      * @return the spread, or null
      */
     Spread spreadAt(double t) {
-        return Spread.of(dispersion, retardation, t);
+        return Spread.ofInverseLength(dispersion, retardation, t);
     }
 
     /**

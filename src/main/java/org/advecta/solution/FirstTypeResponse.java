@@ -97,7 +97,7 @@ final class FirstTypeResponse implements UnitResponse {
 
     @Override
     public double value(double x, double t, double shift) {
-        return value(x, t, shift, Spread.of(d, r, t));
+        return value(x, t, shift, Spread.ofInverseLength(d, r, t));
     }
 
     @Override
@@ -129,7 +129,7 @@ final class FirstTypeResponse implements UnitResponse {
     public double gradient(double x, double t, double shift) {
         // ∂F/∂x = (v−u)/(4D)·e^{s1}erfc(A_u) − (e^{s1−A_u²}/L)·[(A_v + B_u)·erfcx(B_u) + 2φ(B_u)]
         // with A_v + B_u = (2x + (u − v)t/R)/L ≥ 0: every term is ≤ 0, nothing cancels.
-        final Spread s = Spread.of(d, r, t);
+        final Spread s = Spread.ofInverseLength(d, r, t);
         final double au = s.scaled(x - uR * t);
         final double bu = s.scaled(x + uR * t);
         final double av = s.scaled(x - vR * t);
@@ -149,7 +149,7 @@ final class FirstTypeResponse implements UnitResponse {
         // R(∞) − R = e^{s1}·J(a, b) = e^{−A_v² − μt/R}·∫_a^b φ, a = P_u − Q, b = P_u + Q, so
         // ∂/∂x = (e^{−A_v² − μt/R}/L)·[φ(a) + φ(b) − 2A_v·∫_a^b φ]: the exponent's own
         // x-derivative −2A_v/L is applied directly (k + 2a/L nearly cancel otherwise).
-        final Spread s = Spread.of(d, r, t);
+        final Spread s = Spread.ofInverseLength(d, r, t);
         final double m = s.scaled(uR * t);
         final double h = s.scaled(x);
         final double a = m - h;
@@ -182,7 +182,7 @@ final class FirstTypeResponse implements UnitResponse {
      * with P = ut/(RL), Q = x/L, v + u = 4μD/(u − v) ≥ 0.
      */
     double fluxAveragedUpstream(double x, double t, double shift) {
-        final Spread s = Spread.of(d, r, t);
+        final Spread s = Spread.ofInverseLength(d, r, t);
         final double au = s.scaled(x - uR * t);
         final double bu = s.scaled(x + uR * t);
         final double av = s.scaled(x - vR * t);
@@ -213,14 +213,14 @@ final class FirstTypeResponse implements UnitResponse {
     public double complement(double x, double t) {
         // F(∞) − F(t) = e^{s1}·½[erfc(−A_u) − e^{−A_u²}erfcx(B_u)] = e^{s1}·J(−A_u, B_u)
         // −A_u and B_u are P_u ∓ Q with P_u = ut/(RL), Q = x/L: pass those, not x ± ut/R
-        final Spread s = Spread.of(d, r, t);
+        final Spread s = Spread.ofInverseLength(d, r, t);
         return expS1(x) * ErfcxIntegrals.jCentred(s.scaled(uR * t), s.scaled(x));
     }
 
     @Override
     public double density(double x, double t) {
         // ∂F/∂t = x/(t√π L)·exp(−μt/R − A_v²): the first-passage density (Duhamel)
-        final Spread s = Spread.of(d, r, t);
+        final Spread s = Spread.ofInverseLength(d, r, t);
         final double av = s.scaled(x - vR * t);
         return ScaledExp.value(s.scaled(x) / (t * SQRT_PI), -muR * t, av);
     }
@@ -228,7 +228,7 @@ final class FirstTypeResponse implements UnitResponse {
     @Override
     public double densityGradient(double x, double t) {
         // ∂/∂x of x/(t√π L)·e^{−μt/R − A²} = e^{−μt/R − A²}/(t√π L)·(1 − 2A·x/L)
-        final Spread s = Spread.of(d, r, t);
+        final Spread s = Spread.ofInverseLength(d, r, t);
         final double av = s.scaled(x - vR * t);
         final double q = s.scaled(x);
         return ScaledExp.value(s.inverseLength() / (t * SQRT_PI), -muR * t, av)
@@ -239,7 +239,7 @@ final class FirstTypeResponse implements UnitResponse {
     public double flush(double x, double t) {
         // 1 − F₀ = (1 − e^{s1⁰}) + e^{s1⁰}·J(−A₀, B₀), u₀ = |v|, s1⁰ = min(v, 0)·x/D ≤ 0:
         // two non-negative terms.
-        final Spread s = Spread.of(d, r, t);
+        final Spread s = Spread.ofInverseLength(d, r, t);
         final double s10 = k0 * x;
         return -Math.expm1(s10)
             + Math.exp(s10) * ErfcxIntegrals.jCentred(s.scaled(Math.abs(vR) * t), s.scaled(x));

@@ -92,20 +92,30 @@ public final class InitialSlug extends AbstractSolution1D {
 
     @Override
     double valueAt(double x, double t) {
-        return valueAt(x, t, Spread.of(dispersion, retardation, t));
+        return value(x, t, Spread.inverseLength(dispersion, retardation, t));
     }
 
     @Override
     double valueAt(double x, double t, Spread s) {
-        final double m = s.scaled(x - Math.fma(drift, t, middle));
-        final double h = s.scaled(halfWidth);
+        return value(x, t, s.inverseLength());
+    }
+
+    @Override
+    Spread spreadAt(double t) {
+        // only 1/L is needed, and point and profile evaluation must agree bit for bit
+        return Spread.ofInverseLength(dispersion, retardation, t);
+    }
+
+    private double value(double x, double t, double inverseLength) {
+        final double m = (x - Math.fma(drift, t, middle)) * inverseLength;
+        final double h = halfWidth * inverseLength;
         final double diff = ErrorFunctions.erfDifferenceCentred(m, h);
         return c0 * (0.5 * diff * Math.exp(decayExponent(t)));
     }
 
     @Override
     double gradientAt(double x, double t) {
-        final Spread s = Spread.of(dispersion, retardation, t);
+        final Spread s = Spread.ofInverseLength(dispersion, retardation, t);
         final double m = s.scaled(x - Math.fma(drift, t, middle));
         final double h = s.scaled(halfWidth);
         final double scale = s.inverseLength() / SQRT_PI;

@@ -98,19 +98,29 @@ public final class InitialStep extends AbstractSolution1D {
 
     @Override
     double valueAt(double x, double t) {
-        return valueAt(x, t, Spread.of(dispersion, retardation, t));
+        return value(x, t, Spread.inverseLength(dispersion, retardation, t));
     }
 
     @Override
     double valueAt(double x, double t, Spread s) {
-        final double a = sign() * s.scaled(x - centre(t));
+        return value(x, t, s.inverseLength());
+    }
+
+    @Override
+    Spread spreadAt(double t) {
+        // only 1/L is needed, and point and profile evaluation must agree bit for bit
+        return Spread.ofInverseLength(dispersion, retardation, t);
+    }
+
+    private double value(double x, double t, double inverseLength) {
+        final double a = sign() * ((x - centre(t)) * inverseLength);
         return c0 * (0.5 * ExpErfc.value(decayExponent(t), a));
     }
 
     @Override
     double gradientAt(double x, double t) {
         // ∂/∂x ½erfc(±ξ/L) = ∓exp(−ξ²/L²)/(L√π)
-        final Spread s = Spread.of(dispersion, retardation, t);
+        final Spread s = Spread.ofInverseLength(dispersion, retardation, t);
         final double a = s.scaled(x - centre(t));
         return -sign() * c0
             * ScaledExp.value(s.inverseLength() / SQRT_PI, decayExponent(t), a);

@@ -86,7 +86,8 @@ abstract class InletSolution extends AbstractSolution1D {
     @Override
     Spread spreadAt(double t) {
         // a pulse evaluates the response at two times, each with its own spread
-        return kind == InletInput.Kind.PULSE ? null : Spread.of(dispersion, retardation, t);
+        return kind == InletInput.Kind.PULSE ? null
+            : Spread.ofInverseLength(dispersion, retardation, t);
     }
 
     @Override

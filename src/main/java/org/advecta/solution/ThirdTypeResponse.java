@@ -75,7 +75,7 @@ final class ThirdTypeResponse implements UnitResponse {
         final double decay;
 
         Point(double x, double t) {
-            s = Spread.of(d, r, t);
+            s = Spread.ofInverseLength(d, r, t);
             au = s.scaled(x - uR * t);
             bu = s.scaled(x + uR * t);
             bv = s.scaled(x + vR * t);
@@ -89,7 +89,7 @@ final class ThirdTypeResponse implements UnitResponse {
 
     @Override
     public double value(double x, double t, double shift) {
-        return value(x, t, shift, Spread.of(d, r, t));
+        return value(x, t, shift, Spread.ofInverseLength(d, r, t));
     }
 
     @Override
@@ -273,7 +273,7 @@ final class ThirdTypeResponse implements UnitResponse {
     @Override
     public double flush(double x, double t) {
         // 1 − T₀ = ½·core(A_v, B_v), the decay-free complement
-        final Spread s = Spread.of(d, r, t);
+        final Spread s = Spread.ofInverseLength(d, r, t);
         return 0.5 * core(s.scaled(x - vR * t), s.scaled(x + vR * t));
     }
 
