@@ -42,7 +42,7 @@ class PlumeReferenceTest {
     private static final String GENERATOR = "gen_plume.py";
     private static final Tolerance CONDITIONED = Tolerance.conditioned(16, 2);
     /** The bound on the returned relative error estimate at default settings. */
-    private static final double MAX_RELATIVE_ESTIMATE = 1e-10;
+    private static final double MAX_RELATIVE_ESTIMATE = EstimateAudit.MAX_RELATIVE_ESTIMATE;
     private static final double WALL = -0.5;
     private static final RateHistory HISTORY = RateHistory.of(new double[] {0, 2, 5},
         new double[] {1, 3, 0});

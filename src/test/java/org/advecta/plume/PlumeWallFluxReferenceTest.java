@@ -33,7 +33,7 @@ import org.junit.jupiter.api.Test;
 class PlumeWallFluxReferenceTest {
 
     private static final String DIR = "fixtures/plume/";
-    private static final double MAX_RELATIVE_ESTIMATE = 1e-10;
+    private static final double MAX_RELATIVE_ESTIMATE = EstimateAudit.MAX_RELATIVE_ESTIMATE;
 
     private interface Source {
         Estimate estimate(double plane, double t);

@@ -19,7 +19,7 @@ import org.advecta.transport.TransportParameters;
 class PlumeWallProperties {
 
     /** The bound on the returned relative error estimate at default settings. */
-    private static final double MAX_RELATIVE_ESTIMATE = 1e-10;
+    private static final double MAX_RELATIVE_ESTIMATE = EstimateAudit.MAX_RELATIVE_ESTIMATE;
     /** Values at least this large are judged relative (far above underflow). */
     private static final double JUDGED = 1e-250;
 

@@ -1,17 +1,8 @@
 package org.advecta.plume;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
-import java.math.BigDecimal;
-import java.math.MathContext;
-import java.util.ArrayList;
-import java.util.List;
-import java.util.Locale;
 import org.advecta.quadrature.Estimate;
 import org.advecta.testing.FixtureAudit;
 import org.advecta.testing.ReferenceTable;
-import org.advecta.testing.ReferenceTable.Flag;
 import org.advecta.testing.ReferenceTable.Row;
 import org.advecta.transport.TransportParameters;
 import org.junit.jupiter.api.Test;
@@ -32,9 +23,6 @@ import org.junit.jupiter.api.Test;
 class PlumeWallReferenceTest {
 
     private static final String DIR = "fixtures/plume/";
-    /** The bound on the returned relative error estimate at default settings. */
-    private static final double MAX_RELATIVE_ESTIMATE = 1e-10;
-
     private static Estimate evaluate(Row r) {
         final double dl = r.getDouble("DL");
         final double dt = r.getDouble("DT");
@@ -53,48 +41,11 @@ class PlumeWallReferenceTest {
         final ReferenceTable table = ReferenceTable.load(DIR + "line_wall.csv");
         FixtureAudit.checkProvenance(table, "gen_plume.py", DIR);
         FixtureAudit.checkCoverage(table, FixtureAudit.leastRows(34, 0, 0, 2));
-        final List<String> failures = new ArrayList<>();
-        double worstActual = 0;
-        double worstBound = 0;
-        int normal = 0;
-        int zero = 0;
+        final EstimateAudit audit = new EstimateAudit("line_wall.csv");
         for (Row r : table.rows()) {
-            final Estimate e = evaluate(r);
-            final String where = " at " + r.caseTag();
-            if (!Double.isFinite(e.value()) || !Double.isFinite(e.error())) {
-                failures.add("not finite: " + e + where);
-                continue;
-            }
-            if (r.flag() == Flag.ZERO) {
-                // on the wall: c = 0 exactly (the image's factor −expm1(−0) is 0)
-                assertEquals(0.0, e.value(), "on the wall" + where);
-                zero++;
-                continue;
-            }
-            assertTrue(r.flag() == Flag.NORMAL, "every other row is a normal double: " + r);
-            final BigDecimal exact = r.value();
-            final double actual = new BigDecimal(e.value()).subtract(exact).abs()
-                .divide(exact.abs(), MathContext.DECIMAL64).doubleValue();
-            final double allowed = e.error() / exact.abs().doubleValue();
-            worstActual = Math.max(worstActual, actual);
-            worstBound = Math.max(worstBound, allowed);
-            if (!(actual <= allowed)) {
-                failures.add(String.format(Locale.ROOT,
-                    "error %.3g relative exceeds the returned bound %.3g: %s%s", actual,
-                    allowed, e, where));
-            }
-            if (!(allowed <= MAX_RELATIVE_ESTIMATE)) {
-                failures.add(String.format(Locale.ROOT,
-                    "returned bound %.3g > %.0e relative: %s%s", allowed,
-                    MAX_RELATIVE_ESTIMATE, e, where));
-            }
-            normal++;
+            // on the wall (ZERO rows) c = 0 exactly: the image's factor −expm1(−0) is 0
+            audit.check(r, evaluate(r), true);
         }
-        System.out.println(String.format(Locale.ROOT,
-            "line_wall.csv: %d rows (%d on the wall), worst actual relative error %.3g, "
-                + "worst returned bound %.3g", normal + zero, zero, worstActual, worstBound));
-        assertTrue(normal >= 34 && zero >= 2, "rows: " + normal + " normal, " + zero + " zero");
-        assertTrue(failures.isEmpty(), () -> failures.size() + " failures:\n"
-            + String.join("\n", failures));
+        audit.finish(34, 2, 34);
     }
 }
