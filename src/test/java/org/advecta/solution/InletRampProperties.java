@@ -7,6 +7,7 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.IntRange;
+import org.advecta.internal.GaussLegendre;
 import org.advecta.transport.TransportParameters;
 import org.junit.jupiter.api.Test;
 
@@ -30,26 +31,37 @@ class InletRampProperties {
             : FirstTypeInlet.of(p, InletInput.constant(1.0));
     }
 
-    /** ∫₀ᵗ U ds by composite 10-point Gauss–Legendre on geometric panels towards 0. */
+    /**
+     * ∫₀ᵗ U ds by composite 10-point Gauss–Legendre on panels graded geometrically towards
+     * both ends (t·2⁻ᵏ and t(1 − 2⁻ᵏ)), each split in 8: ahead of the front U rises within
+     * t/A² of t, and near s = 0 it is flat.
+     */
     private static double integrateStep(Solution1D u, double x, double t) {
+        final double[] cuts = new double[2 * 60 + 1];
+        int n = 0;
+        for (int k = 60; k >= 1; k--) {
+            cuts[n++] = t * Math.pow(2, -k);
+        }
+        cuts[n++] = 0.5 * t;
+        for (int k = 2; k <= 60; k++) {
+            cuts[n++] = t - t * Math.pow(2, -k);
+        }
         double sum = 0;
-        double hi = t;
-        for (int k = 0; k < 60; k++) {
-            final double lo = k == 59 ? 0 : 0.5 * hi;
-            // 16 equal sub-panels of [lo, hi]: smooth enough for the rule to be exact to
-            // about 1e-14 of the panel (checked by halving in the property's tolerance)
-            final double w = (hi - lo) / 16;
-            for (int j = 0; j < 16; j++) {
+        double lo = 0;
+        for (int i = 0; i <= n; i++) {
+            final double hi = i < n ? cuts[i] : t;
+            final double w = (hi - lo) / 8;
+            for (int j = 0; j < 8 && w > 0; j++) {
                 final double a = lo + j * w;
-                sum += org.advecta.internal.GaussLegendre.integrate(s -> s == 0 ? 0 : u.value(x, s),
-                    a + 0.5 * w, 0.5 * w);
+                sum += GaussLegendre.integrate(s -> s == 0 ? 0 : u.value(x, s), a + 0.5 * w,
+                    0.5 * w);
             }
-            hi = lo;
+            lo = hi;
         }
         return sum;
     }
 
-    @Property(tries = 200)
+    @Property(tries = 40)
     void rampIsTheTimeIntegralOfTheStep(@ForAll boolean third,
                                         @ForAll @DoubleRange(min = 0.05, max = 5) double v,
                                         @ForAll @DoubleRange(min = -2, max = 1) double logD,
@@ -60,13 +72,13 @@ class InletRampProperties {
         final TransportParameters p = params(v, logD, r, mu);
         final double w = ramp(third, p).value(x, t);
         final double q = integrateStep(step(third, p), x, t);
-        // 960 panels of Gauss–Legendre on a smooth positive integrand: 1e-10 of the integral
-        // covers the panels at the front of the steepest parameters here (D = 0.01)
+        // about 1000 graded panels of Gauss–Legendre on a smooth positive integrand: 1e-10
+        // of the integral covers the steepest panels of the parameters here (D = 0.01)
         assertEquals(q, w, 1e-10 * Math.max(q, 1e-300) + 1e-300, third + " " + p + " x=" + x
             + " t=" + t);
     }
 
-    @Property(tries = 300)
+    @Property(tries = 100)
     void timeDerivativeIsTheStep(@ForAll boolean third,
                                  @ForAll @DoubleRange(min = 0.05, max = 5) double v,
                                  @ForAll @DoubleRange(min = -2, max = 1) double logD,
@@ -85,7 +97,7 @@ class InletRampProperties {
             + " t=" + t);
     }
 
-    @Property(tries = 300)
+    @Property(tries = 100)
     void equationHolds(@ForAll boolean third,
                        @ForAll @DoubleRange(min = 0.05, max = 5) double v,
                        @ForAll @DoubleRange(min = -1, max = 1) double logD,
@@ -118,7 +130,7 @@ class InletRampProperties {
             + " t=" + t + " residual " + residual + " of " + max);
     }
 
-    @Property(tries = 300)
+    @Property(tries = 100)
     void inletConditionHolds(@ForAll boolean third,
                              @ForAll @DoubleRange(min = 0.05, max = 5) double v,
                              @ForAll @DoubleRange(min = -2, max = 1) double logD,
@@ -143,7 +155,7 @@ class InletRampProperties {
         assertEquals(v * t, flux, 1e-6 * (v * t + v * w0), p + " t=" + t);
     }
 
-    @Property(tries = 300)
+    @Property(tries = 50)
     void positiveAndIncreasingInTime(@ForAll boolean third,
                                      @ForAll @DoubleRange(min = 0.01, max = 10) double v,
                                      @ForAll @DoubleRange(min = -4, max = 1) double logD,
@@ -152,7 +164,7 @@ class InletRampProperties {
                                      @ForAll @DoubleRange(min = 0, max = 5) double x) {
         final InletRamp w = ramp(third, params(v, logD, r, mu));
         double previous = 0;
-        for (double t = 1e-3; t < 200; t *= 1.1) {
+        for (double t = 1e-3; t < 200; t *= 1.25) {
             final double c = w.value(x, t);
             assertTrue(c >= 0 && Double.isFinite(c), "t=" + t + " c=" + c);
             // W_t = U ≥ 0; allow the closed form's relative rounding (16 ulp)
@@ -172,7 +184,7 @@ class InletRampProperties {
                 }
                 for (double d : new double[] {1e-8, 1e-3, 1, 1e3}) {
                     for (double r : new double[] {1, 30}) {
-                        for (double mu : new double[] {0, 1e-6, 1, 1e4}) {
+                        for (double mu : new double[] {0, 1e-6, 1e4}) {
                             final TransportParameters p = TransportParameters.of(v, d)
                                 .withRetardation(r).withDecay(mu);
                             final InletRamp w = ramp(third == 1, p);
@@ -189,10 +201,10 @@ class InletRampProperties {
                 }
             }
         }
-        assertTrue(n > 5000);
+        assertTrue(n > 4000);
     }
 
-    @Property(tries = 100)
+    @Property(tries = 30)
     void noDecayFluxInletMatchesTheLimitOfSmallDecay(
             @ForAll @DoubleRange(min = 0.05, max = 5) double v,
             @ForAll @DoubleRange(min = -2, max = 1) double logD,
