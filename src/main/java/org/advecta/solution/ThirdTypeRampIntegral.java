@@ -1,0 +1,107 @@
+package org.advecta.solution;
+
+import org.advecta.internal.GaussLegendre;
+
+/**
+ * The bracket of the flux inlet's ramp response without decay,
+ * <pre>
+ * β(Q, P) = (1/(8P²))·∫₀^{2P} χ(A + τ)·τ·(4P − τ) dτ,   A = Q − P,   χ = −erfcx‴/2 &gt; 0
+ * </pre>
+ * so that W₃ = t·e^{−A²}·β (see {@link InletRamp}). It equals
+ * (1/(4P²))∫_A^B (B − r)(ψ(r) − ψ(B)) dr (B = Q + P, integrate ψ(r) − ψ(B) = ∫_r^B χ by
+ * parts) and, in closed form, [φ(A) − mean of φ on [A, B]]/(2P) − ψ(B)/2, whose terms cancel
+ * (by a factor up to 19 ahead of the front): the integral of a positive function is used
+ * instead.
+ *
+ * <p>χ is entire and, like φ and ψ, smooth on the scale max(1, s) for s ≥ −3/2, so the
+ * 10-point rule on panels of half-width at most a quarter of max(1, s) at their left end is
+ * exact to rounding (the library's criterion for φ, {@link ErfcxIntegrals#narrow}; checked
+ * by the reference fixture).
+ */
+final class ThirdTypeRampIntegral {
+
+    private static final double ONE_OVER_SQRT_PI = 0.5641895835477563;
+    /** Below this, χ = 4φ − 2sψ loses at most a factor 2.3 (at s = 1). */
+    private static final double CHI_FRACTION_FROM = 1;
+    /** From here on χ comes from its asymptotic series. */
+    private static final double CHI_ASYMPTOTIC_FROM = 10;
+
+    private ThirdTypeRampIntegral() {
+    }
+
+    /**
+     * Returns β(Q, P) for P &gt; 0 with A = Q − P ≥ −3/2 (the caller passes A as it formed it).
+     */
+    static double bracket(double q, double p, double a) {
+        if (ErfcxIntegrals.narrow(q, p)) {
+            // one panel centred at Q: τ = P(1 + y), τ(4P − τ) = P²(1 + y)(3 − y), dτ = P dy:
+            // β = (P/8)·∫_{−1}^{1} χ(Q + Py)(1 + y)(3 − y) dy (no division by P)
+            return 0.125 * p * GaussLegendre.integrate(
+                y -> chi(q + p * y) * (1 + y) * (3 - y), 0.0, 1.0);
+        }
+        // composite: panels [o, o + 2h] in τ, h a quarter of max(1, A + o)
+        final double width = 2 * p;
+        final double fourP = 4 * p;
+        double sum = 0;
+        double comp = 0;
+        double o = 0;
+        while (o < width) {
+            final double h = Math.min(0.25 * Math.max(1, a + o), 0.5 * (width - o));
+            final double centre = o + h;
+            final double term = GaussLegendre.integrate(
+                tau -> chi(a + tau) * tau * (fourP - tau), centre, h);
+            final double s = sum + term;
+            comp += Math.abs(sum) >= Math.abs(term) ? (sum - s) + term : (term - s) + sum;
+            sum = s;
+            if (!(centre + h > o)) {
+                break;
+            }
+            o = centre + h;
+        }
+        return (sum + comp) / (8 * p * p);
+    }
+
+    /**
+     * χ(s) = −erfcx‴(s)/2 = 4φ(s) − 2sψ(s) &gt; 0 (from erfcx′ = 2s·erfcx − 2/√π, differentiated
+     * twice). For s ≥ 1 the difference cancels (χ ≈ 3/(√π s⁴) while 4φ ≈ 2/(√π s²)); there
+     * χ = ψ·2K₃ with Laplace's continued fraction K_i = (i/2)/(s + K_{i+1}) (the ratio of
+     * successive derivatives of erfcx, the minimal solution of their recurrence
+     * erfcx⁽ⁿ⁺¹⁾ = 2s·erfcx⁽ⁿ⁾ + 2n·erfcx⁽ⁿ⁻¹⁾; A&amp;S 7.1.14, as in the library's ψ), summed
+     * backward from as many terms as the library's ψ uses; from s = 10 on the asymptotic
+     * series √π·χ = s⁻² Σ_{n≥1} (−1)^{n+1}(2n−1)!!·2n(2n+1)·(2s²)⁻ⁿ (A&amp;S 7.1.23,
+     * differentiated three times).
+     */
+    static double chi(double s) {
+        if (s < CHI_FRACTION_FROM) {
+            return 4 * ErfcxIntegrals.phi(s) - 2 * s * ErfcxIntegrals.psi(s);
+        }
+        if (s >= CHI_ASYMPTOTIC_FROM) {
+            return asymptotic(s);
+        }
+        final double terms = Math.ceil(180 / (s * s) + 100 / s) + 8;
+        double kk = 0;
+        for (int i = (int) terms; i >= 3; i--) {
+            kk = 0.5 * i / (s + kk);
+        }
+        return 2 * kk * ErfcxIntegrals.psi(s);
+    }
+
+    private static double asymptotic(double s) {
+        if (s == Double.POSITIVE_INFINITY) {
+            return 0.0;
+        }
+        final double y = 0.5 / s / s;
+        // term_n = (−1)^{n+1}(2n−1)!!·yⁿ, summed with the factor 2n(2n+1)
+        double term = y;
+        double sum = 6 * y;
+        for (int n = 2; n <= 40; n++) {
+            term *= -(2 * n - 1) * y;
+            final double add = 2.0 * n * (2 * n + 1) * term;
+            sum += add;
+            if (Math.abs(add) < 0x1.0p-56 * Math.abs(sum)) {
+                break;
+            }
+        }
+        return ONE_OVER_SQRT_PI * sum / s / s;
+    }
+}
