@@ -48,7 +48,7 @@ class ReadmeConvolutionExampleTest {
         // a logged inlet series (piecewise constant): exact Duhamel superposition of Ogata–Banks
         Solution1D inlet = TabulatedInlet.of(p, InletCondition.FIRST_TYPE,
             new double[] {0, 2, 5}, new double[] {1.0, 0.4, 0.0});
-        // the same log interpolated linearly (time integral of the unit response, with an estimate)
+        // the same log interpolated linearly: an exact sum of closed-form ramp responses
         Estimate ramp = TabulatedInlet.linear(p, InletCondition.FIRST_TYPE,
             new double[] {0, 2, 5}, new double[] {1.0, 0.4, 0.0}).valueWithError(1.0, 3.0);
         // smooth data: Gauss–Hermite about the moving centre (adaptive fallback), with an estimate
