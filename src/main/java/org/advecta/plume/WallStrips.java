@@ -1,5 +1,6 @@
 package org.advecta.plume;
 
+import org.advecta.internal.HermiteSeries;
 import org.advecta.internal.ScaledExp;
 import org.advecta.special.ErrorFunctions;
 
@@ -28,8 +29,6 @@ final class WallStrips {
     private static final double SQRT_PI = Math.sqrt(Math.PI);
     /** 4/√π. */
     private static final double FOUR_OVER_SQRT_PI = 2.256758334191025;
-    /** Largest n of T_n the series may reach; far beyond 2⁻⁶⁰ for h &lt; 1/2, 4mh &lt; 1. */
-    private static final int SERIES_TERMS = 30;
     /** The cancellation ratio reported where the difference rounds to ≤ 0 (a bound of 1). */
     static final double NO_DIGITS = 0x1.0p49;
 
@@ -144,7 +143,7 @@ final class WallStrips {
      * otherwise (then 4mh ≥ 1):     erfcx(p) − e^(−4mh)·erfcx(p + 2h)
      * </pre>
      * The series is the Taylor series of erf about m in Hermite polynomials (the one of
-     * {@link ErrorFunctions#erfDifferenceCentred}, Abramowitz &amp; Stegun 7.1.19, recalled),
+     * {@link HermiteSeries} and {@link ErrorFunctions#erfDifferenceCentred}, Abramowitz &amp; Stegun 7.1.19, recalled),
      * multiplied by e^(p²) (e^(p² − m²) = e^(−h(2p + h))); its terms fall like 2⁻ⁿ/√(n!) and
      * its sum lies in [e^(−2mh − h²), e^(2mh)], so it cannot cancel. In the erfc form
      * (A&amp;S 7.1.2) the second term is at most e^(−1) of the first (erfcx decreases), a loss
@@ -156,22 +155,7 @@ final class WallStrips {
         }
         final double m = p + h;
         if (h < 0.5 && 4 * m * h < 1) {
-            final double a = 2 * m * h;
-            final double b = 2 * h * h;
-            double previous = 1;
-            double current = a;
-            double sum = 1;
-            for (int n = 1; n < SERIES_TERMS; n += 2) {
-                // current = T_n (odd), previous = T_(n−1): two steps to the next even term
-                final double even = (a * current - b * previous) / (n + 1);
-                final double odd = (a * even - b * current) / (n + 2);
-                sum += even / (n + 2);
-                previous = even;
-                current = odd;
-                if (Math.abs(even) < 0x1.0p-60 * sum && Math.abs(odd) < 0x1.0p-60 * sum) {
-                    break;
-                }
-            }
+            final double sum = HermiteSeries.centredSum(2 * m * h, 2 * h * h);
             return FOUR_OVER_SQRT_PI * h * sum * Math.exp(-h * (2 * p + h));
         }
         final double q = p + 2 * h;

@@ -1,5 +1,6 @@
 package org.advecta.special;
 
+import org.advecta.internal.HermiteSeries;
 import org.advecta.internal.ScaledExp;
 import org.apache.commons.numbers.gamma.Erf;
 import org.apache.commons.numbers.gamma.ErfDifference;
@@ -203,52 +204,15 @@ public final class ErrorFunctions {
     private static final double TWO_OVER_SQRT_PI = 1.1283791670955126;
 
     /**
-     * erf(m + h) − erf(m − h) for a narrow interval off the origin (h &lt; 1/2, 4|m|h &lt; 1),
-     * from the Taylor series of erf about m, whose derivatives are
-     * erf^(n+1)(z) = (−1)ⁿ(2/√π)Hₙ(z)e^{−z²} (Abramowitz &amp; Stegun 7.1.19, number recalled
-     * from memory; Hₙ the Hermite polynomials): only the odd powers of h survive, so
-     * <pre>
-     * erf(m + h) − erf(m − h) = (4h/√π)·e^{−m²}·Σ_j T_{2j}/(2j + 1),   T_n = Hₙ(m)·hⁿ/n!
-     * T_{n+1} = (2mh·T_n − 2h²·T_{n−1})/(n + 1)     (from Hₙ₊₁ = 2zHₙ − 2nHₙ₋₁)
-     * </pre>
-     * The scaled T_n never overflow (|2mh| &lt; 1/2, h² &lt; 1/4), fall like 2^{−n}/√(n!), and
-     * the sum lies in [e^{−2|m|h−h²}, e^{2|m|h}], so it cannot cancel. One exponential (with
-     * its exponent in double-double), against 20 for a 10-point quadrature.
+     * erf(m + h) − erf(m − h) for a narrow interval off the origin (h &lt; 1/2, 4|m|h &lt; 1):
+     * (4h/√π)·e^{−m²}·Σ_j T_{2j}/(2j + 1), the Taylor series of erf about m in Hermite
+     * polynomials ({@link HermiteSeries}, Abramowitz &amp; Stegun 7.1.19), which cannot cancel.
+     * One exponential (with its exponent in double-double), against 20 for a 10-point
+     * quadrature.
      */
     private static double narrowErfDifference(double m, double h) {
-        final double a = 2 * m * h;
-        final double b = 2 * h * h;
-        double previous = 1;
-        double current = a;
-        double sum = 1;
-        for (int n = 1; n < SERIES_TERMS; n += 2) {
-            // current = T_n (odd), previous = T_{n−1}: step twice to the next even term
-            final double even = (a * current - b * previous) * RECIPROCALS[n + 1];
-            final double odd = (a * even - b * current) * RECIPROCALS[n + 2];
-            sum += even * RECIPROCALS_ODD[(n + 1) / 2];
-            previous = even;
-            current = odd;
-            if (Math.abs(even) < 0x1.0p-60 * sum && Math.abs(odd) < 0x1.0p-60 * sum) {
-                break;
-            }
-        }
+        final double sum = HermiteSeries.centredSum(2 * m * h, 2 * h * h);
         return ScaledExp.value(2 * h * TWO_OVER_SQRT_PI * sum, 0.0, m);
-    }
-
-    /** Largest n of T_n the series may reach; n = 30 is far beyond 2⁻⁶⁰ for h &lt; 1/2. */
-    private static final int SERIES_TERMS = 30;
-    /** 1/k, k = 0..32 (index 0 unused). */
-    private static final double[] RECIPROCALS = new double[SERIES_TERMS + 3];
-    /** 1/(2j + 1), j = 0..16. */
-    private static final double[] RECIPROCALS_ODD = new double[SERIES_TERMS / 2 + 2];
-
-    static {
-        for (int k = 1; k < RECIPROCALS.length; k++) {
-            RECIPROCALS[k] = 1.0 / k;
-        }
-        for (int j = 0; j < RECIPROCALS_ODD.length; j++) {
-            RECIPROCALS_ODD[j] = 1.0 / (2 * j + 1);
-        }
     }
 
     /**
