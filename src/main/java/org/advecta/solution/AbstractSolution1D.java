@@ -128,6 +128,8 @@ abstract class AbstractSolution1D implements Solution1D {
      * @return the spread, or null
      */
     Spread spreadAt(double t) {
+        // the same doubles as Spread.inverseLength(D, R, t), which point evaluation uses, so
+        // that a profile equals its points bit for bit
         return Spread.ofInverseLength(dispersion, retardation, t);
     }
 

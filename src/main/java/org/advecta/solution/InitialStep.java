@@ -107,12 +107,6 @@ public final class InitialStep extends AbstractSolution1D {
         return value(x, t, s.inverseLength());
     }
 
-    @Override
-    Spread spreadAt(double t) {
-        // only 1/L is needed, and point and profile evaluation must agree bit for bit
-        return Spread.ofInverseLength(dispersion, retardation, t);
-    }
-
     private double value(double x, double t, double inverseLength) {
         final double a = sign() * ((x - centre(t)) * inverseLength);
         final double decay = decayExponent(t);
