@@ -2,7 +2,6 @@ package org.advecta.convolution;
 
 import java.util.Locale;
 import org.advecta.internal.Checks;
-import org.advecta.quadrature.Estimate;
 import org.advecta.solution.Domain;
 import org.advecta.solution.FirstTypeInlet;
 import org.advecta.solution.InletInput;
@@ -125,17 +124,14 @@ public final class TabulatedInlet implements Solution1D {
      * </pre>
      * with sₖ the slope after tₖ (0 after the last time), U the unit step response and W the
      * ramp response (the response to g(t) = t, i.e. ∫₀^τ U(x, s) ds; Duhamel), both in
-     * closed form: W is {@link InletRamp} (first type: exact closed form for every μ; third
-     * type: exact closed form for μ = 0, and for μ &gt; 0 an adaptive Gauss–Legendre integral
-     * of the closed-form U with an error estimate, see {@link InletRamp}).
+     * closed form: W is {@link InletRamp} (both inlet types, every μ ≥ 0).
      *
      * <p><b>Accuracy.</b> Each term is within its class's contract (max(16, 2κ) ULP for the
      * closed forms); the sum is within about (n + 16 + 2κ)·2⁻⁵³·(|g₀|·U + Σ|sₖ − sₖ₋₁|·W(x, t − tₖ))
-     * of the exact solution for the interpolated input (n the number of points), plus the
-     * quadrature estimates for the third type with μ &gt; 0 (reported by
-     * {@link #valueWithError}). The bound is absolute: the ramps of a long series largely
-     * cancel (a plateau is two ramps of opposite slope), so where c is much smaller than the
-     * terms its relative error is correspondingly larger.
+     * of the exact solution for the interpolated input (n the number of points). The bound is
+     * absolute: the ramps of a long series largely cancel (a plateau is two ramps of opposite
+     * slope), so where c is much smaller than the terms its relative error is correspondingly
+     * larger.
      *
      * @param parameters v, D, R, μ (v &gt; 0 for the third type)
      * @param condition the inlet condition
@@ -147,38 +143,6 @@ public final class TabulatedInlet implements Solution1D {
     public static TabulatedInlet linear(TransportParameters parameters, InletCondition condition,
                                         double[] times, double[] levels) {
         return new TabulatedInlet(parameters, condition, times, levels, true);
-    }
-
-    /**
-     * Returns c(x, t) with an error estimate: 0 where every term is a closed form (each
-     * within its contract), else the sum of |sₖ − sₖ₋₁| times the quadrature estimates of the
-     * third-type ramp responses with μ &gt; 0 (see {@link InletRamp#valueWithError}).
-     *
-     * @param x position, finite and ≥ 0
-     * @param t time, finite and ≥ 0
-     * @return the value and its estimate
-     * @throws IllegalArgumentException if x or t is invalid
-     */
-    public Estimate valueWithError(double x, double t) {
-        final double steps = stepValue(x, t);
-        if (kinks == null || t == 0) {
-            return Estimate.of(steps, 0.0);
-        }
-        double sum = steps;
-        double comp = 0;
-        double error = 0;
-        for (int k = 0; k < times.length && times[k] < t; k++) {
-            if (kinks[k] == 0) {
-                continue;
-            }
-            final Estimate w = ramp.valueWithError(x, t - times[k]);
-            final double term = kinks[k] * w.value();
-            final double u = sum + term;
-            comp += Math.abs(sum) >= Math.abs(term) ? (sum - u) + term : (term - u) + sum;
-            sum = u;
-            error += Math.abs(kinks[k]) * w.error();
-        }
-        return Estimate.of(sum + comp, error);
     }
 
     /**
@@ -201,7 +165,8 @@ public final class TabulatedInlet implements Solution1D {
     }
 
     /**
-     * Returns c(x, t) (for a linear series, the value of {@link #valueWithError}).
+     * Returns c(x, t): the sum of the closed-form step (and, for a linear series, ramp)
+     * responses.
      *
      * @param x position, finite and ≥ 0
      * @param t time, finite and ≥ 0
@@ -210,7 +175,21 @@ public final class TabulatedInlet implements Solution1D {
      */
     @Override
     public double value(double x, double t) {
-        return kinks == null ? stepValue(x, t) : valueWithError(x, t).value();
+        final double steps = stepValue(x, t);
+        if (kinks == null || t == 0) {
+            return steps;
+        }
+        double sum = steps;
+        double comp = 0;
+        for (int k = 0; k < times.length && times[k] < t; k++) {
+            if (kinks[k] != 0) {
+                final double term = kinks[k] * ramp.value(x, t - times[k]);
+                final double u = sum + term;
+                comp += Math.abs(sum) >= Math.abs(term) ? (sum - u) + term : (term - u) + sum;
+                sum = u;
+            }
+        }
+        return sum + comp;
     }
 
     private double stepValue(double x, double t) {

@@ -18,7 +18,8 @@
  *       returned error bound.</li>
  * </ol>
  * Time-varying inlets on the half-line: {@link org.advecta.convolution.TabulatedInlet}
- * (piecewise-constant series, exact superposition of the constant-input closed forms) and
+ * (piecewise-constant or piecewise-linear series, exact superposition of the closed-form
+ * step and ramp responses) and
  * {@link org.advecta.convolution.FunctionInlet} (g(t) as a function, by quadrature of the
  * impulse response, with an error estimate).
  *

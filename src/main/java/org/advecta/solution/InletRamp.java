@@ -1,11 +1,8 @@
 package org.advecta.solution;
 
-import java.util.Arrays;
 import org.advecta.internal.Checks;
-import org.advecta.internal.GaussLegendre;
 import org.advecta.internal.ScaledExp;
 import org.advecta.internal.Spread;
-import org.advecta.quadrature.Estimate;
 import org.advecta.special.ErrorFunctions;
 import org.advecta.transport.TransportParameters;
 
@@ -52,18 +49,33 @@ import org.advecta.transport.TransportParameters;
  * A ≥ 0 or P ≤ 3/2, and by the first line otherwise (behind the front with P &gt; 3/2, where
  * its terms lose at most a factor 1.8 to cancellation: measured with mpmath over the region).
  *
- * <p><b>Third type with decay</b> (v &gt; 0, μ &gt; 0): no cancellation-free closed form is
- * implemented; W₃ = ∫₀ᵗ T(x, s) ds is integrated from the closed-form step response T
- * (van Genuchten &amp; Alves 1982) by adaptive 10-point Gauss–Legendre (panels accepted when
- * two levels agree within 2⁻⁵¹ of the integral) with a conservative error estimate
- * ({@link #valueWithError}; measured below 1e-10 relative on the fixture, the actual error
- * within the estimate plus max(16, 2κ) ULP).
+ * <p><b>Third type with decay</b> (v &gt; 0, μ &gt; 0): with u as above, P_u = ut/(RL),
+ * P_v = vt/(RL), A_u = Q − P_u, B_u = Q + P_u, B_v = Q + P_v, the response 2v·e^{λx}/(p²(v + w))
+ * is a fourth divided difference, over the nodes A_u, A_u, B_v, B_u, B_u, of the inverse
+ * of the Laplace pair e^{−k√p}/(√p + b) (Carslaw &amp; Jaeger 1959, Appendix V). Ahead of and
+ * near the front (A_u ≥ −1) it is evaluated as
+ * <pre>
+ * W₃ = 2P_v·t·e^{−A_v² − μt/R}·∫_{A_u}^{B_u} (Q·erfcx⁗(z) − erfcx⁽⁵⁾(z)/2)·M(z) dz
+ * </pre>
+ * with M ≥ 0 the cubic B-spline of those knots, and behind it (A_u &lt; −1) as two residues
+ * at A_u in closed form plus a positive integral over [B_v, B_u]; each integral by composite
+ * 10-point Gauss–Legendre on panels on which the rule is exact to rounding. Only positive
+ * terms are added (the residues' bracket loses at most a factor 2.15), and nothing is
+ * divided by μ, so μ → 0 meets the μ = 0 form. Derived here (the class
+ * ThirdTypeDecayRamp has the steps); checked against 45-digit Duhamel quadrature of the
+ * step response of van Genuchten &amp; Alves (1982) in two fixtures, and against the μ = 0
+ * form and between its two forms by property tests.
  *
- * <p><b>Accuracy.</b> Closed forms (first type; third type with μ = 0): within max(16, 2κ)
- * ULP of the exact result wherever it is a normal double, κ the componentwise condition
- * number with respect to x, t, v, D, R, μ; measured against 50-digit references computed by
- * an independent route (the test fixtures). Third type with μ &gt; 0: within the returned
- * estimate plus max(16, 2κ) ULP.
+ * <p><b>Accuracy.</b> Every form: within max(16, 2κ) ULP of the exact result wherever it is a
+ * normal double, κ the componentwise condition number with respect to x, t, v, D, R, μ;
+ * measured against 45-digit references computed by an independent route (the test
+ * fixtures).
+ *
+ * <p><b>Cost.</b> The first type, and the flux inlet without decay behind the front: a few
+ * erfc and exp. Otherwise the flux inlet adds a composite Gauss–Legendre sum of 10 nodes per
+ * panel, panels of half-width a quarter of max(1, z) over the interval of z integrated
+ * (about 4·ln of the ratio of its ends once they pass 1: a few dozen panels at Péclet
+ * numbers near 10⁸).
  *
  * <p><b>Range.</b> x ≥ 0 and t ≥ 0 finite; W(x, 0) = 0. No overflow at any Péclet number;
  * values below the double range are 0.
@@ -76,13 +88,6 @@ public final class InletRamp {
      * its terms cancel (a factor 4.6 at P = 1/2, 1.8 at P = 3/2: mpmath over Q ∈ [0, P]).
      */
     private static final double BEHIND_CLOSED_FROM = 1.5;
-    /** Relative tolerance of the decay case's quadrature (a few units of 2⁻⁵³). */
-    private static final double QUADRATURE_TOLERANCE = 0x1.0p-51;
-    /** Deepest bisection of that quadrature. */
-    private static final int MAX_DEPTH = 60;
-    /** Most panels of one integral (then accepted, with their differences as the estimate). */
-    private static final int PANEL_BUDGET = 4000;
-
     private final TransportParameters parameters;
     private final boolean thirdType;
     private final double d;
@@ -99,10 +104,8 @@ public final class InletRamp {
     private final double drOverV2;
     /** (v − u)/(2D) ≤ 0, without cancellation. */
     private final double k;
-    /** Below this time the step response is not evaluated (see {@link #panel}). */
-    private final double tinyTime;
-    /** The unit step response, for the third type with decay. */
-    private final ThirdTypeResponse step;
+    /** The third type with decay; null otherwise. */
+    private final ThirdTypeDecayRamp decayRamp;
 
     private InletRamp(TransportParameters parameters, boolean thirdType) {
         if (parameters == null) {
@@ -127,8 +130,7 @@ public final class InletRamp {
         this.rOverU = r / u;
         this.rOverV = r / v;
         this.drOverV2 = d * r / v / v;
-        this.tinyTime = r / d * 0x1.0p-1000;
-        this.step = thirdType && mu > 0 ? new ThirdTypeResponse(v, d, r, mu, mu) : null;
+        this.decayRamp = thirdType && mu > 0 ? new ThirdTypeDecayRamp(v, u, -vMinusU) : null;
     }
 
     /**
@@ -172,16 +174,6 @@ public final class InletRamp {
     }
 
     /**
-     * Returns whether {@link #value} is a closed form (false only for the third type with
-     * μ &gt; 0, which is integrated).
-     *
-     * @return true for a closed form
-     */
-    public boolean isClosedForm() {
-        return step == null;
-    }
-
-    /**
      * Returns W(x, t) (see the class comment for the formula and accuracy).
      *
      * @param x position, finite and ≥ 0
@@ -198,25 +190,7 @@ public final class InletRamp {
         if (!thirdType) {
             return firstType(x, t);
         }
-        return step == null ? thirdTypeNoDecay(x, t) : integrate(x, t).value();
-    }
-
-    /**
-     * Returns W(x, t) with an error estimate: 0 for the closed forms (each within its
-     * contract), the quadrature's estimate for the third type with μ &gt; 0.
-     *
-     * @param x position, finite and ≥ 0
-     * @param t time, finite and ≥ 0
-     * @return the value and its estimate
-     * @throws IllegalArgumentException if x or t is invalid
-     */
-    public Estimate valueWithError(double x, double t) {
-        if (step == null || t == 0) {
-            return Estimate.of(value(x, t), 0.0);
-        }
-        Checks.nonNegative("x", x);
-        Checks.nonNegative("t", t);
-        return integrate(x, t);
+        return decayRamp == null ? thirdTypeNoDecay(x, t) : thirdTypeDecay(x, t);
     }
 
     /**
@@ -285,95 +259,13 @@ public final class InletRamp {
         return lead - j + ScaledExp.value(tail, 0.0, a);
     }
 
-    /**
-     * ∫₀ᵗ T(x, s) ds by adaptive bisection with the 10-point Gauss–Legendre rule on fixed
-     * panels: geometric towards s = 0 ([t/2, t], [t/4, t/2], …) and of the front's width
-     * about the front s_f = Rx/u, so that no feature of the step response is narrower than
-     * its panel (a bisection started on [0, t] alone can accept a panel whose nodes all miss
-     * the rise near s = 0). A panel is accepted when the rule on it and on its halves agree
-     * within the tolerance relative to the total (T ≥ 0 and increasing in s: nothing
-     * cancels); panels are taken from s = t down and stop once hi·T(hi), a bound of the rest,
-     * is below 2⁻⁶⁰ of the sum.
-     */
-    private Estimate integrate(double x, double t) {
-        final double[] cuts = cuts(x, t);
-        final double[] acc = new double[4];
-        final double scale = Math.max(panel(x, 0.75 * t, 0.25 * t), Double.MIN_NORMAL);
-        final double tol = QUADRATURE_TOLERANCE * scale;
-        for (int i = cuts.length - 1; i > 0; i--) {
-            final double lo = cuts[i - 1];
-            final double hi = cuts[i];
-            if (lo > 0 && hi * step.value(x, hi, 0.0) <= 0x1.0p-60 * acc[0]) {
-                // T is increasing: everything below hi adds at most hi·T(hi)
-                acc[2] += hi * step.value(x, hi, 0.0);
-                break;
-            }
-            final double h = 0.5 * hi - 0.5 * lo;
-            bisect(x, lo, hi, panel(x, lo + h, h), tol, 0, acc);
-        }
-        return Estimate.of(acc[0] + acc[1], acc[2]);
-    }
-
-    /** The panel ends: 0, t·2⁻ᵏ (k ≤ 80) and s_f ± j·w (|j| ≤ 8, w the front's width). */
-    private double[] cuts(double x, double t) {
-        final double[] out = new double[FRONT_CUTS + GEOMETRIC_CUTS + 3];
-        int n = 0;
-        out[n++] = 0.0;
-        out[n++] = t;
-        double g = t;
-        for (int k = 0; k < GEOMETRIC_CUTS; k++) {
-            g *= 0.5;
-            out[n++] = g;
-        }
-        final double front = x * r / u;
-        // width of the rise of T in time near s_f: L(s_f)·R/u = √(4D s_f/R)·R/u
-        final double width = Math.sqrt(4 * d * front / r) * r / u;
-        for (int j = -FRONT_CUTS / 2; j <= FRONT_CUTS / 2; j++) {
-            final double c = front + j * width;
-            if (c > 0 && c < t) {
-                out[n++] = c;
-            }
-        }
-        final double[] cuts = Arrays.copyOf(out, n);
-        Arrays.sort(cuts);
-        return cuts;
-    }
-
-    /** Panels about the front (an even number; the front itself is one more). */
-    private static final int FRONT_CUTS = 16;
-    /** Geometric panels towards s = 0. */
-    private static final int GEOMETRIC_CUTS = 80;
-
-    private double panel(double x, double m, double h) {
-        // below tinyTime the spread R/(4Dτ) overflows; there T(x, τ) ≤ T(0, τ) = O(v√(τ/(DR)))
-        // and the panel adds below 2⁻⁵⁰⁰·τ to the integral: taken as 0
-        return GaussLegendre.integrate(tau -> tau <= tinyTime ? 0.0 : step.value(x, tau, 0.0),
-            m, h);
-    }
-
-    private void bisect(double x, double lo, double hi, double whole, double tol, int depth,
-                        double[] acc) {
-        final double mid = 0.5 * lo + 0.5 * hi;
-        final double h = 0.25 * (hi - lo);
-        final double left = panel(x, lo + h, h);
-        final double right = panel(x, mid + h, h);
-        final double both = left + right;
-        final double diff = Math.abs(both - whole);
-        acc[3]++;
-        // relative to the larger of the first estimate and what has been summed (the first
-        // estimate can be far too small when T rises steeply just before t); a budget of
-        // panels bounds the cost, the estimate then carrying what was not resolved
-        final double scaled = Math.max(tol, QUADRATURE_TOLERANCE * (acc[0] + both));
-        if (diff <= scaled || depth >= MAX_DEPTH || acc[3] >= PANEL_BUDGET) {
-            // Neumaier summation of the accepted panels
-            final double sum = acc[0] + both;
-            acc[1] += Math.abs(acc[0]) >= Math.abs(both) ? (acc[0] - sum) + both
-                : (both - sum) + acc[0];
-            acc[0] = sum;
-            acc[2] += diff;
-            return;
-        }
-        bisect(x, lo, mid, left, tol, depth + 1, acc);
-        bisect(x, mid, hi, right, tol, depth + 1, acc);
+    private double thirdTypeDecay(double x, double t) {
+        final double il = inverseLength(t);
+        final double q = x * il;
+        final double pv = vR * t * il;
+        final double pu = uR * t * il;
+        final double au = (x - uR * t) * il;
+        final double av = (x - vR * t) * il;
+        return decayRamp.value(t, q, pv, pu, au, av, -muR * t, k * x);
     }
 }

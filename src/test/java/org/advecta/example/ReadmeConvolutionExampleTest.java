@@ -49,8 +49,8 @@ class ReadmeConvolutionExampleTest {
         Solution1D inlet = TabulatedInlet.of(p, InletCondition.FIRST_TYPE,
             new double[] {0, 2, 5}, new double[] {1.0, 0.4, 0.0});
         // the same log interpolated linearly: an exact sum of closed-form ramp responses
-        Estimate ramp = TabulatedInlet.linear(p, InletCondition.FIRST_TYPE,
-            new double[] {0, 2, 5}, new double[] {1.0, 0.4, 0.0}).valueWithError(1.0, 3.0);
+        double ramp = TabulatedInlet.linear(p, InletCondition.FIRST_TYPE,
+            new double[] {0, 2, 5}, new double[] {1.0, 0.4, 0.0}).value(1.0, 3.0);
         // smooth data: Gauss–Hermite about the moving centre (adaptive fallback), with an estimate
         Estimate smooth = FunctionConvolution.of(p, xi -> 1 / Math.cosh(xi)).withSmoothData()
             .value(2.0, 1.5);
@@ -70,7 +70,8 @@ class ReadmeConvolutionExampleTest {
         // before the level changes at t = 2 the series is the constant input 1.0
         assertEquals(FirstTypeInlet.of(p, InletInput.constant(1.0)).value(1.0, 1.5),
             inlet.value(1.0, 1.5), 4 * Math.ulp(1.0));
-        assertTrue(ramp.error() < 1e-10, ramp.toString());
+        // the input never exceeds 1 and is positive until t = 5 (maximum principle)
+        assertTrue(ramp > 0 && ramp < 1, "ramp = " + ramp);
         // the smooth route and the adaptive route agree within their estimates
         assertEquals(e.value(), smooth.value(), e.error() + smooth.error());
         assertTrue(cw > 0 && fw.value() > 0, cw + " " + fw);
