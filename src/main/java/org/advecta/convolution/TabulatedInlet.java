@@ -1,6 +1,7 @@
 package org.advecta.convolution;
 
 import java.util.Locale;
+import java.util.function.DoubleBinaryOperator;
 import org.advecta.internal.Checks;
 import org.advecta.solution.Domain;
 import org.advecta.solution.FirstTypeInlet;
@@ -179,14 +180,23 @@ public final class TabulatedInlet implements Solution1D {
         if (kinks == null || t == 0) {
             return steps;
         }
-        double sum = steps;
+        return superpose(steps, kinks, ramp::value, x, t);
+    }
+
+    /**
+     * start + Σ_{k: tₖ &lt; t} wₖ·f(x, t − tₖ) over the non-zero weights, with Neumaier's
+     * compensation (Duhamel's sum of shifted responses).
+     */
+    private double superpose(double start, double[] weights, DoubleBinaryOperator f, double x,
+                             double t) {
+        double sum = start;
         double comp = 0;
         for (int k = 0; k < times.length && times[k] < t; k++) {
-            if (kinks[k] != 0) {
-                final double term = kinks[k] * ramp.value(x, t - times[k]);
-                final double u = sum + term;
-                comp += Math.abs(sum) >= Math.abs(term) ? (sum - u) + term : (term - u) + sum;
-                sum = u;
+            if (weights[k] != 0) {
+                final double term = weights[k] * f.applyAsDouble(x, t - times[k]);
+                final double s = sum + term;
+                comp += Math.abs(sum) >= Math.abs(term) ? (sum - s) + term : (term - s) + sum;
+                sum = s;
             }
         }
         return sum + comp;
@@ -195,21 +205,12 @@ public final class TabulatedInlet implements Solution1D {
     private double stepValue(double x, double t) {
         Checks.nonNegative("x", x);
         Checks.nonNegative("t", t);
-        double sum = 0;
-        double comp = 0;
-        for (int k = 0; k < times.length && times[k] < t; k++) {
-            if (jumps[k] != 0) {
-                final double term = jumps[k] * unit.value(x, t - times[k]);
-                final double s = sum + term;
-                comp += Math.abs(sum) >= Math.abs(term) ? (sum - s) + term : (term - s) + sum;
-                sum = s;
-            }
-        }
+        final double sum = superpose(0, jumps, unit::value, x, t);
         if (t == 0 && x == 0 && condition == InletCondition.FIRST_TYPE) {
             // the inlet holds g(0⁺) from the start, as the constant-input classes do
             return jumps[0] * unit.value(0, 0);
         }
-        return sum + comp;
+        return sum;
     }
 
     /**
@@ -229,19 +230,10 @@ public final class TabulatedInlet implements Solution1D {
         }
         Checks.nonNegative("x", x);
         Checks.nonNegative("t", t);
-        double sum = 0;
-        double comp = 0;
-        for (int k = 0; k < times.length && times[k] < t; k++) {
-            if (jumps[k] != 0) {
-                final double term = jumps[k] * unit.gradient(x, t - times[k]);
-                final double s = sum + term;
-                comp += Math.abs(sum) >= Math.abs(term) ? (sum - s) + term : (term - s) + sum;
-                sum = s;
-            }
-        }
+        final double sum = superpose(0, jumps, unit::gradient, x, t);
         if (t == 0) {
             return jumps[0] * unit.gradient(x, 0);
         }
-        return sum + comp;
+        return sum;
     }
 }

@@ -1,6 +1,5 @@
 package org.advecta.solution;
 
-import org.advecta.internal.GaussLegendre;
 import org.advecta.internal.ScaledExp;
 import org.advecta.special.ErrorFunctions;
 
@@ -130,25 +129,10 @@ final class ThirdTypeDecayRamp {
      * half-width a quarter of max(1, z) at their left end.
      */
     private static double leftIntegral(double q, double a, double gamma, double c1, double c0) {
-        double sum = 0;
-        double comp = 0;
-        double o = 0;
-        while (o < gamma) {
-            final double h = Math.min(0.25 * Math.max(1, a + o), 0.5 * (gamma - o));
-            final double centre = o + h;
-            final double term = GaussLegendre.integrate(y -> {
-                final double eta = y / gamma;
-                return fourthDerivativeOfH(q, a + y) * eta * eta * Math.fma(c1, 1 - eta, c0);
-            }, centre, h);
-            final double s = sum + term;
-            comp += Math.abs(sum) >= Math.abs(term) ? (sum - s) + term : (term - s) + sum;
-            sum = s;
-            if (!(centre + h > o)) {
-                break;
-            }
-            o = centre + h;
-        }
-        return (sum + comp) / gamma;
+        return PanelSum.over(gamma, o -> 0.25 * Math.max(1, a + o), y -> {
+            final double eta = y / gamma;
+            return fourthDerivativeOfH(q, a + y) * eta * eta * Math.fma(c1, 1 - eta, c0);
+        }) / gamma;
     }
 
     /**
@@ -157,25 +141,10 @@ final class ThirdTypeDecayRamp {
      */
     private static double rightIntegral(double q, double b, double delta, double c1,
                                         double c0) {
-        double sum = 0;
-        double comp = 0;
-        double o = 0;
-        while (o < delta) {
-            final double h = Math.min(Math.max(0.25, (b - o) / 6), 0.5 * (delta - o));
-            final double centre = o + h;
-            final double term = GaussLegendre.integrate(s -> {
-                final double eta = s / delta;
-                return fourthDerivativeOfH(q, b - s) * eta * eta * Math.fma(c1, 1 - eta, c0);
-            }, centre, h);
-            final double s = sum + term;
-            comp += Math.abs(sum) >= Math.abs(term) ? (sum - s) + term : (term - s) + sum;
-            sum = s;
-            if (!(centre + h > o)) {
-                break;
-            }
-            o = centre + h;
-        }
-        return (sum + comp) / delta;
+        return PanelSum.over(delta, o -> Math.max(0.25, (b - o) / 6), s -> {
+            final double eta = s / delta;
+            return fourthDerivativeOfH(q, b - s) * eta * eta * Math.fma(c1, 1 - eta, c0);
+        }) / delta;
     }
 
     /**
@@ -212,26 +181,9 @@ final class ThirdTypeDecayRamp {
         if (delta == 0) {
             return 0.5 * pv * kSecond(q, a, bv, gamma);
         }
-        double sum = 0;
-        double comp = 0;
-        double o = 0;
-        while (o < delta) {
-            final double h = Math.min(0.25 * Math.max(1, bv + o), 0.5 * (delta - o));
-            final double centre = o + h;
-            final double term = GaussLegendre.integrate(s -> {
-                final double eta = s / delta;
-                // d = z − A = γ + s (no cancellation)
-                return kSecond(q, a, bv + s, gamma + s) * eta;
-            }, centre, h);
-            final double s = sum + term;
-            comp += Math.abs(sum) >= Math.abs(term) ? (sum - s) + term : (term - s) + sum;
-            sum = s;
-            if (!(centre + h > o)) {
-                break;
-            }
-            o = centre + h;
-        }
-        return pv * (sum + comp) / delta;
+        // d = z − A = γ + s (no cancellation)
+        return pv * PanelSum.over(delta, o -> 0.25 * Math.max(1, bv + o),
+            s -> kSecond(q, a, bv + s, gamma + s) * (s / delta)) / delta;
     }
 
     /**

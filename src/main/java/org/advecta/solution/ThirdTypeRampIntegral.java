@@ -40,25 +40,10 @@ final class ThirdTypeRampIntegral {
                 y -> chi(q + p * y) * (1 + y) * (3 - y), 0.0, 1.0);
         }
         // composite: panels [o, o + 2h] in τ, h a quarter of max(1, A + o)
-        final double width = 2 * p;
         final double fourP = 4 * p;
-        double sum = 0;
-        double comp = 0;
-        double o = 0;
-        while (o < width) {
-            final double h = Math.min(0.25 * Math.max(1, a + o), 0.5 * (width - o));
-            final double centre = o + h;
-            final double term = GaussLegendre.integrate(
-                tau -> chi(a + tau) * tau * (fourP - tau), centre, h);
-            final double s = sum + term;
-            comp += Math.abs(sum) >= Math.abs(term) ? (sum - s) + term : (term - s) + sum;
-            sum = s;
-            if (!(centre + h > o)) {
-                break;
-            }
-            o = centre + h;
-        }
-        return (sum + comp) / (8 * p * p);
+        final double sum = PanelSum.over(2 * p, o -> 0.25 * Math.max(1, a + o),
+            tau -> chi(a + tau) * tau * (fourP - tau));
+        return sum / (8 * p * p);
     }
 
     /**
