@@ -58,12 +58,6 @@ final class ThirdTypeDecayRamp {
     private static final double ONE_OVER_SQRT_PI = 0.5641895835477563;
     /** From here down the split form is used (its bracket loses at most a factor 2.15). */
     static final double BEHIND_FROM = -1;
-    /**
-     * Below this z the derivatives of erfcx come from the forward recurrence
-     * erfcx⁽ⁿ⁺¹⁾ = 2z·erfcx⁽ⁿ⁾ + 2n·erfcx⁽ⁿ⁻¹⁾ (positive terms for z ≤ 0; at z → 1 the fifth
-     * loses a factor 12: mpmath), from it up from Laplace's continued fraction.
-     */
-    private static final double FRACTION_FROM = 1;
 
     /** ρ = v/u = P_v/P_u ∈ (0, 1). */
     private final double rho;
@@ -192,8 +186,9 @@ final class ThirdTypeDecayRamp {
      */
     private static double kSecond(double q, double a, double z, double d) {
         final double phi = ErfcxIntegrals.phi(z);
-        final double psi = ErfcxIntegrals.psi(z);
-        final double chi = ThirdTypeRampIntegral.chi(z);
+        final boolean tabled = z < ErfcxHigherDerivatives.TO;
+        final double psi = tabled ? ErfcxHigherDerivatives.psi(z) : ErfcxIntegrals.psi(z);
+        final double chi = tabled ? ErfcxHigherDerivatives.chi(z) : ThirdTypeRampIntegral.chi(z);
         final double h = phi + q * ErrorFunctions.erfcx(z);
         final double minusH1 = psi + 2 * q * phi;
         final double h2 = chi + 2 * q * psi;
@@ -202,26 +197,31 @@ final class ThirdTypeDecayRamp {
     }
 
     /**
-     * H⁗(z) = 2Q·ω + ϑ with ω = erfcx⁗/2 &gt; 0 and ϑ = −erfcx⁽⁵⁾/2 &gt; 0, for z ≥ −1. Below
-     * {@link #FRACTION_FROM}: χ = 4φ − 2zψ, ω = 6ψ − 2zχ, ϑ = 8χ − 2zω (the recurrence; only
-     * positive terms for z ≤ 0). From it up: ω = 2K₄χ, ϑ = 2K₅ω, χ = 2K₃ψ with Laplace's
-     * continued fraction K_i = (i/2)/(z + K_{i+1}) (the ratios of successive derivatives,
-     * A&amp;S 7.1.14, as for χ in {@link ThirdTypeRampIntegral}), summed backward from as many
-     * terms as there.
+     * H⁗(z) = 2Q·ω + ϑ with ω = erfcx⁗/2 &gt; 0 and ϑ = −erfcx⁽⁵⁾/2 &gt; 0, for z ≥ −3/2. Below
+     * z = −1 from the recurrence χ = 4φ − 2zψ, ω = 6ψ − 2zχ, ϑ = 8χ − 2zω (only positive
+     * terms there); on [−1, 10) from the Chebyshev series of {@link ErfcxHigherDerivatives};
+     * from 10 on as ω = 2K₄χ,
+     * ϑ = 2K₅ω, χ = 2K₃ψ with Laplace's continued fraction K_i = (i/2)/(z + K_{i+1}) (the
+     * ratios of successive derivatives, A&amp;S 7.1.14), summed backward.
      */
     static double fourthDerivativeOfH(double q, double z) {
-        final double psi = ErfcxIntegrals.psi(z);
-        final double chi;
         final double omega;
         final double theta;
-        if (z < FRACTION_FROM) {
-            chi = 4 * ErfcxIntegrals.phi(z) - 2 * z * psi;
+        if (z < ErfcxHigherDerivatives.FROM) {
+            // z ∈ [−3/2, −1) (the split form's property test reaches below −1): the
+            // recurrence, positive terms only
+            final double psi = ErfcxIntegrals.psi(z);
+            final double chi = 4 * ErfcxIntegrals.phi(z) - 2 * z * psi;
             omega = 6 * psi - 2 * z * chi;
             theta = 8 * chi - 2 * z * omega;
+        } else if (z < ErfcxHigherDerivatives.TO) {
+            omega = ErfcxHigherDerivatives.omega(z);
+            theta = ErfcxHigherDerivatives.theta(z);
         } else {
             if (z == Double.POSITIVE_INFINITY) {
                 return 0.0;
             }
+            // at most 20 terms from z = 10 on
             final double terms = Math.ceil(180 / (z * z) + 100 / z) + 8;
             double kk = 0;
             for (int i = (int) terms; i >= 6; i--) {
@@ -230,8 +230,7 @@ final class ThirdTypeDecayRamp {
             final double k5 = 2.5 / (z + kk);
             final double k4 = 2 / (z + k5);
             final double k3 = 1.5 / (z + k4);
-            chi = 2 * k3 * psi;
-            omega = 2 * k4 * chi;
+            omega = 4 * k4 * k3 * ErfcxIntegrals.psi(z);
             theta = 2 * k5 * omega;
         }
         return 2 * q * omega + theta;

@@ -21,11 +21,6 @@ import org.advecta.internal.GaussLegendre;
 final class ThirdTypeRampIntegral {
 
     private static final double ONE_OVER_SQRT_PI = 0.5641895835477563;
-    /** Below this, χ = 4φ − 2sψ loses at most a factor 2.3 (at s = 1). */
-    private static final double CHI_FRACTION_FROM = 1;
-    /** From here on χ comes from its asymptotic series. */
-    private static final double CHI_ASYMPTOTIC_FROM = 10;
-
     private ThirdTypeRampIntegral() {
     }
 
@@ -48,27 +43,20 @@ final class ThirdTypeRampIntegral {
 
     /**
      * χ(s) = −erfcx‴(s)/2 = 4φ(s) − 2sψ(s) &gt; 0 (from erfcx′ = 2s·erfcx − 2/√π, differentiated
-     * twice). For s ≥ 1 the difference cancels (χ ≈ 3/(√π s⁴) while 4φ ≈ 2/(√π s²)); there
-     * χ = ψ·2K₃ with Laplace's continued fraction K_i = (i/2)/(s + K_{i+1}) (the ratio of
-     * successive derivatives of erfcx, the minimal solution of their recurrence
-     * erfcx⁽ⁿ⁺¹⁾ = 2s·erfcx⁽ⁿ⁾ + 2n·erfcx⁽ⁿ⁻¹⁾; A&amp;S 7.1.14, as in the library's ψ), summed
-     * backward from as many terms as the library's ψ uses; from s = 10 on the asymptotic
-     * series √π·χ = s⁻² Σ_{n≥1} (−1)^{n+1}(2n−1)!!·2n(2n+1)·(2s²)⁻ⁿ (A&amp;S 7.1.23,
-     * differentiated three times).
+     * twice). That sum of positive terms is used below s = −1; on [−1, 10), where for s &gt; 0
+     * it cancels (χ ≈ 3/(√π s⁴) while 4φ ≈ 2/(√π s²)), the Chebyshev series of
+     * {@link ErfcxHigherDerivatives}; from s = 10 on the asymptotic series
+     * √π·χ = s⁻² Σ_{n≥1} (−1)^{n+1}(2n−1)!!·2n(2n+1)·(2s²)⁻ⁿ (A&amp;S 7.1.23, differentiated
+     * three times).
      */
     static double chi(double s) {
-        if (s < CHI_FRACTION_FROM) {
+        if (s < ErfcxHigherDerivatives.FROM) {
             return 4 * ErfcxIntegrals.phi(s) - 2 * s * ErfcxIntegrals.psi(s);
         }
-        if (s >= CHI_ASYMPTOTIC_FROM) {
+        if (s >= ErfcxHigherDerivatives.TO) {
             return asymptotic(s);
         }
-        final double terms = Math.ceil(180 / (s * s) + 100 / s) + 8;
-        double kk = 0;
-        for (int i = (int) terms; i >= 3; i--) {
-            kk = 0.5 * i / (s + kk);
-        }
-        return 2 * kk * ErfcxIntegrals.psi(s);
+        return ErfcxHigherDerivatives.chi(s);
     }
 
     private static double asymptotic(double s) {
