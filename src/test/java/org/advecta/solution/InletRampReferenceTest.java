@@ -60,4 +60,18 @@ class InletRampReferenceTest {
         }
         check.finish();
     }
+
+    @Test
+    void firstTypeWithFlowTowardsTheInletMatchesItsFixture() {
+        // gen_ramp_upstream.py: v < 0, the same independent route (Duhamel quadrature at 45+
+        // digits), points within 0.5, 5 and 30 layer widths D/|v| of the inlet
+        final ReferenceTable table = ReferenceTable.load(DIR + "ramp_upstream.csv");
+        FixtureAudit.checkProvenance(table, "gen_ramp_upstream.py", DIR);
+        FixtureAudit.checkCoverage(table, FixtureAudit.leastRows(60, 0, 6, 0));
+        final FixtureCheck check = new FixtureCheck(table, CONTRACT).withConditionedSubnormals();
+        for (Row r : table.rows()) {
+            check.check(r, "first, v < 0", ramp(r).value(r.getDouble("x"), r.getDouble("t")));
+        }
+        check.finish();
+    }
 }
