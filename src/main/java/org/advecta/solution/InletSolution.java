@@ -135,35 +135,48 @@ abstract class InletSolution extends AbstractSolution1D {
      * quadrature).
      */
     private double pulse(double x, double t) {
+        // Each response is evaluated at one call site only (R(t) for both t ≤ t₀ and the
+        // direct difference, R(t − t₀) for both tests of that difference): the JIT inlines
+        // every call site of this method into the caller's compiled code, and four copies
+        // of R made that code 17 KB instead of 12 KB (HotSpot 17, the pulse benchmark) for no
+        // work saved. The branches and their order are those of the comment above; the
+        // values are the same doubles.
         final double t0 = input.duration();
-        if (t <= t0) {
-            return response.value(x, t, 0.0);
-        }
+        final boolean ended = t > t0;
         final double t1 = t - t0;
-        if (response.pastHalfSteady(x, t)) {
-            // the front has passed: the difference of complements, unless it would lose more
-            // than one bit, where a narrow interval is integrated instead
-            final double before = response.complement(x, t1);
-            final double after = response.complement(x, t);
-            if (before - after >= 0.5 * before || !narrowInTime(x, t1, t)) {
-                return before - after;
+        if (ended) {
+            if (response.pastHalfSteady(x, t)) {
+                return afterFront(x, t1, t);
             }
-            return integrate(x, t1, t, false);
-        }
-        if (narrowInTime(x, t1, t)) {
-            return integrate(x, t1, t, false);
+            if (narrowInTime(x, t1, t)) {
+                return integrate(x, t1, t, false);
+            }
         }
         final double now = response.value(x, t, 0.0);
-        if (now <= 0.5 * response.steady(x)) {
-            return now - response.value(x, t1, 0.0);
+        if (!ended) {
+            return now;
         }
-        // near the steady state: still the plain difference while it loses at most one bit
-        // (the end of the pulse has not arrived yet), else the complements
+        // before the front has passed: the direct difference while R(t) is below half its
+        // steady state, or, near the steady state, while it loses at most one bit (the end
+        // of the pulse has not arrived yet); else the complements
         final double before = response.value(x, t1, 0.0);
-        if (before <= 0.5 * now) {
+        if (now <= 0.5 * response.steady(x) || before <= 0.5 * now) {
             return now - before;
         }
         return response.complement(x, t1) - response.complement(x, t);
+    }
+
+    /**
+     * The pulse once the front has passed: the difference of complements, unless it would
+     * lose more than one bit, where a narrow interval is integrated instead.
+     */
+    private double afterFront(double x, double t1, double t) {
+        final double before = response.complement(x, t1);
+        final double after = response.complement(x, t);
+        if (before - after >= 0.5 * before || !narrowInTime(x, t1, t)) {
+            return before - after;
+        }
+        return integrate(x, t1, t, false);
     }
 
     private double pulseGradient(double x, double t) {

@@ -59,62 +59,84 @@ final class ErfcxRational {
     /**
      * Returns φ(x) = 1/√π − x·erfcx(x).
      *
+     * <p>Each piece is a method of its own, so that this dispatch is small enough for the JIT
+     * to inline into its callers and each piece is compiled (or inlined where it is hot) on
+     * its own: as one method of 574 bytecodes it was beyond the JIT's limit for inlining hot
+     * methods (325 bytecodes on HotSpot), and every call went through an out-of-line call.
+     *
      * @param x the argument, in [1/2, 10)
      * @return φ(x)
      */
     static double phi(double x) {
         if (x < 1.5) {
-            final double y = 0.405935764312744140625;
-            final double zm = x - 0.5;
-            double p = 0.00180424538297014223957;
-            p = 0.0195049001251218801359 + p * zm;
-            p = 0.0888900368967884466578 + p * zm;
-            p = 0.191003695796775433986 + p * zm;
-            p = 0.178114665841120341155 + p * zm;
-            p = -0.098090592216281240205 + p * zm;
-            double q = 0.337511472483094676155e-5;
-            q = 0.0113385233577001411017 + q * zm;
-            q = 0.12385097467900864233 + q * zm;
-            q = 0.578052804889902404909 + q * zm;
-            q = 1.42628004845511324508 + q * zm;
-            q = 1.84759070983002217845 + q * zm;
-            q = 1.0 + q * zm;
-            return (ONE_OVER_SQRT_PI - y) - p / q;
+            return phiFromHalf(x);
         }
         if (x < 2.5) {
-            final double y = 0.50672817230224609375;
-            final double zm = x - 1.5;
-            double p = 0.000235839115596880717416;
-            p = 0.00323962406290842133584 + p * zm;
-            p = 0.0175679436311802092299 + p * zm;
-            p = 0.04394818964209516296 + p * zm;
-            p = 0.0386540375035707201728 + p * zm;
-            p = -0.0243500476207698441272 + p * zm;
-            double q = 0.00410369723978904575884;
-            q = 0.0563921837420478160373 + q * zm;
-            q = 0.325732924782444448493 + q * zm;
-            q = 0.982403709157920235114 + q * zm;
-            q = 1.53991494948552447182 + q * zm;
-            q = 1.0 + q * zm;
-            return (ONE_OVER_SQRT_PI - y) - p / q;
+            return phiFromThreeHalves(x);
         }
-        if (x < 4) {
-            final double y = 0.5405750274658203125;
-            final double zm = x - 3.5;
-            double p = 0.113212406648847561139e-4;
-            p = 0.000250269961544794627958 + p * zm;
-            p = 0.00212825620914618649141 + p * zm;
-            p = 0.00840807615555585383007 + p * zm;
-            p = 0.0137384425896355332126 + p * zm;
-            p = 0.00295276716530971662634 + p * zm;
-            double q = 0.000479411269521714493907;
-            q = 0.0105982906484876531489 + q * zm;
-            q = 0.0958492726301061423444 + q * zm;
-            q = 0.442597659481563127003 + q * zm;
-            q = 1.04217814166938418171 + q * zm;
-            q = 1.0 + q * zm;
-            return (ONE_OVER_SQRT_PI - y) - p / q;
-        }
+        return x < 4 ? phiFromFiveHalves(x) : phiFromFour(x);
+    }
+
+    /** φ on [1/2, 3/2): Boost.Math's rational in x − 1/2. */
+    private static double phiFromHalf(double x) {
+        final double y = 0.405935764312744140625;
+        final double zm = x - 0.5;
+        double p = 0.00180424538297014223957;
+        p = 0.0195049001251218801359 + p * zm;
+        p = 0.0888900368967884466578 + p * zm;
+        p = 0.191003695796775433986 + p * zm;
+        p = 0.178114665841120341155 + p * zm;
+        p = -0.098090592216281240205 + p * zm;
+        double q = 0.337511472483094676155e-5;
+        q = 0.0113385233577001411017 + q * zm;
+        q = 0.12385097467900864233 + q * zm;
+        q = 0.578052804889902404909 + q * zm;
+        q = 1.42628004845511324508 + q * zm;
+        q = 1.84759070983002217845 + q * zm;
+        q = 1.0 + q * zm;
+        return (ONE_OVER_SQRT_PI - y) - p / q;
+    }
+
+    /** φ on [3/2, 5/2): Boost.Math's rational in x − 3/2. */
+    private static double phiFromThreeHalves(double x) {
+        final double y = 0.50672817230224609375;
+        final double zm = x - 1.5;
+        double p = 0.000235839115596880717416;
+        p = 0.00323962406290842133584 + p * zm;
+        p = 0.0175679436311802092299 + p * zm;
+        p = 0.04394818964209516296 + p * zm;
+        p = 0.0386540375035707201728 + p * zm;
+        p = -0.0243500476207698441272 + p * zm;
+        double q = 0.00410369723978904575884;
+        q = 0.0563921837420478160373 + q * zm;
+        q = 0.325732924782444448493 + q * zm;
+        q = 0.982403709157920235114 + q * zm;
+        q = 1.53991494948552447182 + q * zm;
+        q = 1.0 + q * zm;
+        return (ONE_OVER_SQRT_PI - y) - p / q;
+    }
+
+    /** φ on [5/2, 4): Boost.Math's rational in x − 7/2. */
+    private static double phiFromFiveHalves(double x) {
+        final double y = 0.5405750274658203125;
+        final double zm = x - 3.5;
+        double p = 0.113212406648847561139e-4;
+        p = 0.000250269961544794627958 + p * zm;
+        p = 0.00212825620914618649141 + p * zm;
+        p = 0.00840807615555585383007 + p * zm;
+        p = 0.0137384425896355332126 + p * zm;
+        p = 0.00295276716530971662634 + p * zm;
+        double q = 0.000479411269521714493907;
+        q = 0.0105982906484876531489 + q * zm;
+        q = 0.0958492726301061423444 + q * zm;
+        q = 0.442597659481563127003 + q * zm;
+        q = 1.04217814166938418171 + q * zm;
+        q = 1.0 + q * zm;
+        return (ONE_OVER_SQRT_PI - y) - p / q;
+    }
+
+    /** φ on [4, 10): Cody's rational in 1/x². */
+    private static double phiFromFour(double x) {
         final double izz = 1 / (x * x);
         double p = 1.63153871373020978498e-2;
         p = 3.05326634961232344035e-1 + p * izz;
