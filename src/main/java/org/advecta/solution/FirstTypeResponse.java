@@ -85,11 +85,11 @@ final class FirstTypeResponse implements UnitResponse {
     }
 
     /** factor·exp(s₁ + shift)·erfc(A_u), as exp(−A_v² − μt/R)·erfcx(A_u) when A_u ≥ 0. */
-    private double firstTerm(double factor, double x, double t, double shift, Spread s,
+    private double firstTerm(double factor, double x, double t, double shift, double il,
                              double au) {
         if (au >= 0) {
             return ScaledExp.value(factor * ErrorFunctions.erfcx(au), trueDecay(t),
-                s.scaled(x - vR * t));
+                (x - vR * t) * il);
         }
         // erfc(A_u) is in (1, 2]; s₁ + shift ≤ 0 unless an input grows
         return ScaledExp.value(factor * ErrorFunctions.erfc(au), s1(x) + shift, 0.0);
@@ -97,14 +97,14 @@ final class FirstTypeResponse implements UnitResponse {
 
     @Override
     public double value(double x, double t, double shift) {
-        return value(x, t, shift, Spread.ofInverseLength(d, r, t));
+        return value(x, t, shift, Spread.inverseLength(d, r, t));
     }
 
     @Override
-    public double value(double x, double t, double shift, Spread s) {
-        final double au = s.scaled(x - uR * t);
-        final double bu = s.scaled(x + uR * t);
-        final double av = s.scaled(x - vR * t);
+    public double value(double x, double t, double shift, double il) {
+        final double au = (x - uR * t) * il;
+        final double bu = (x + uR * t) * il;
+        final double av = (x - vR * t) * il;
         final double second = 0.5 * ErrorFunctions.erfcx(bu);
         if (au >= ERFCX_FROM) {
             // both terms carry exp(−A_v² − μt/R): one exponential for the two
@@ -135,7 +135,7 @@ final class FirstTypeResponse implements UnitResponse {
         final double av = s.scaled(x - vR * t);
         final double avPlusBu = s.scaled(2 * x - vMinusUR * t);
         final double bracket = avPlusBu * ErrorFunctions.erfcx(bu) + 2 * ErfcxIntegrals.phi(bu);
-        return firstTerm(vMinusU / (4 * d), x, t, shift, s, au)
+        return firstTerm(vMinusU / (4 * d), x, t, shift, s.inverseLength(), au)
             - ScaledExp.value(s.inverseLength() * bracket, trueDecay(t), av);
     }
 
@@ -191,7 +191,7 @@ final class FirstTypeResponse implements UnitResponse {
         final double puMinusPv = s.scaled(vPlusU / r * t);
         final double bracket = (puMinusPv + 2 * s.scaled(x)) * ErrorFunctions.erfcx(bu)
             + 2 * ErfcxIntegrals.phi(bu);
-        return firstTerm(-vPlusU / (4 * -v), x, t, shift, s, au)
+        return firstTerm(-vPlusU / (4 * -v), x, t, shift, s.inverseLength(), au)
             - ScaledExp.value(bracket / (4 * pv), trueDecay(t), av);
     }
 

@@ -80,7 +80,10 @@ abstract class InletSolution extends AbstractSolution1D {
 
     @Override
     double valueAt(double x, double t) {
-        return valueAt(x, t, spreadAt(t));
+        // the same double as spreadAt(t).inverseLength(), without an object per point (a
+        // pulse forms its own at its two times)
+        return valueWith(x, t, kind == InletInput.Kind.PULSE ? Double.NaN
+            : Spread.inverseLength(dispersion, retardation, t));
     }
 
     @Override
@@ -92,7 +95,12 @@ abstract class InletSolution extends AbstractSolution1D {
 
     @Override
     double valueAt(double x, double t, Spread s) {
-        final double fromInput = level == 0 ? 0.0 : level * inputResponse(x, t, s);
+        return valueWith(x, t, s == null ? Double.NaN : s.inverseLength());
+    }
+
+    /** c(x, t) given 1/L (NaN for a pulse, which forms its own at two times). */
+    private double valueWith(double x, double t, double il) {
+        final double fromInput = level == 0 ? 0.0 : level * inputResponse(x, t, il);
         if (initial == 0) {
             return fromInput;
         }
@@ -110,11 +118,11 @@ abstract class InletSolution extends AbstractSolution1D {
 
     // Plain comparisons of the kind held in a field rather than a switch on the enum: these
     // run at every point of a profile, and the switch's lookup table is a load more.
-    private double inputResponse(double x, double t, Spread s) {
+    private double inputResponse(double x, double t, double il) {
         if (kind == InletInput.Kind.CONSTANT) {
-            return response.value(x, t, 0.0, s);
+            return response.value(x, t, 0.0, il);
         }
-        return kind == InletInput.Kind.PULSE ? pulse(x, t) : response.value(x, t, -rate * t, s);
+        return kind == InletInput.Kind.PULSE ? pulse(x, t) : response.value(x, t, -rate * t, il);
     }
 
     private double inputResponseGradient(double x, double t) {

@@ -89,26 +89,26 @@ final class ThirdTypeResponse implements UnitResponse {
 
     @Override
     public double value(double x, double t, double shift) {
-        return value(x, t, shift, Spread.ofInverseLength(d, r, t));
+        return value(x, t, shift, Spread.inverseLength(d, r, t));
     }
 
     @Override
-    public double value(double x, double t, double shift, Spread s) {
+    public double value(double x, double t, double shift, double il) {
         // The formula of the class comment with local variables only (no Point: this runs at
         // every point of a profile, and the allocation would cost as much as the formula).
         if (mu == 0 && shift == 0) {
-            final double undecayed = withoutDecay(x, t, s);
+            final double undecayed = withoutDecay(x, t, il);
             if (undecayed == undecayed) {
                 return undecayed;
             }
         }
-        final double q = s.scaled(x);
-        final double pu = s.scaled(uR * t);
-        final double av = s.scaled(x - vR * t);
+        final double q = x * il;
+        final double pu = (uR * t) * il;
+        final double av = (x - vR * t) * il;
         final double decay = -muTrueR * t;
         // 4 v/(u+v)·P_v·M, the multiplier of exp(−A_v² − μt/R)
-        final double second = 4 * ratio * s.scaled(vR * t)
-            * ErfcxIntegrals.meanOfPhi(s.scaled(x + vR * t), s.scaled(x + uR * t));
+        final double second = 4 * ratio * ((vR * t) * il)
+            * ErfcxIntegrals.meanOfPhi((x + vR * t) * il, (x + uR * t) * il);
         final double a = q - pu;
         if (a >= 0) {
             // e^{s₁+shift}·J(A_u, B_u) = e^{−A_v² − μt/R}·∫φ over [A_u, B_u]: one exponential
@@ -136,14 +136,14 @@ final class ThirdTypeResponse implements UnitResponse {
      * times, P ≤ max(1, Q)/4), ½erfc(A) and the bracket would cancel: NaN is returned and
      * the caller takes the general path, which integrates φ there.
      */
-    private double withoutDecay(double x, double t, Spread s) {
-        final double q = s.scaled(x);
-        final double p = s.scaled(vR * t);
+    private double withoutDecay(double x, double t, double il) {
+        final double q = x * il;
+        final double p = (vR * t) * il;
         if (ErfcxIntegrals.narrow(q, p)) {
             return Double.NaN;
         }
-        final double a = s.scaled(x - vR * t);
-        final double b = s.scaled(x + vR * t);
+        final double a = (x - vR * t) * il;
+        final double b = (x + vR * t) * il;
         final double erfcxB = ErrorFunctions.erfcx(b);
         final double phiTerm = 2 * p * ErfcxIntegrals.phi(b);
         if (a >= ERFCX_FROM) {

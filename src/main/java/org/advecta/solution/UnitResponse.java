@@ -13,9 +13,11 @@ interface UnitResponse {
     double value(double x, double t, double shift);
 
     /**
-     * Returns exp(shift)·R(x, t) given s = Spread.of(D, R, t) (computed once for a profile).
+     * Returns exp(shift)·R(x, t) given il = 1/L = √(R/(4Dt)) as {@link Spread#inverseLength}
+     * forms it (computed once for a profile; a plain double, so that nothing is allocated per
+     * point whatever the JIT inlines).
      */
-    double value(double x, double t, double shift, Spread s);
+    double value(double x, double t, double shift, double il);
 
     /** Returns exp(shift)·∂R/∂x. */
     double gradient(double x, double t, double shift);
