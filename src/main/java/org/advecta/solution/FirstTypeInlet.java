@@ -92,8 +92,14 @@ public final class FirstTypeInlet extends InletSolution {
     }
 
     @Override
-    double valueAt(double x, double t, Spread s) {
+    double valueAt(double x, double t) {
         // the inlet holds the input exactly: c(0, t) = g(t) (the formula gives it to 1 ulp)
+        return x == 0 ? input.valueAt(t) : super.valueAt(x, t);
+    }
+
+    @Override
+    double valueAt(double x, double t, Spread s) {
+        // as valueAt(x, t), for a profile
         return x == 0 ? input.valueAt(t) : super.valueAt(x, t, s);
     }
 

@@ -2,6 +2,7 @@ package org.advecta.solution;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.Map;
 import org.advecta.testing.FixtureAudit;
 import org.advecta.testing.FixtureCheck;
 import org.advecta.testing.FixtureCheck.Tolerance;
@@ -51,26 +52,26 @@ class InletRampReferenceTest {
         // gen_ramp_decay.py: the same independent route (Duhamel quadrature at 45+ digits) at
         // μ down to 1e-12 (u − v ≈ 1e-13·v), μ ≫ v²/(4D), Péclet 1e6 and 1e8 at the front,
         // and at and beside the inlet
-        final ReferenceTable table = ReferenceTable.load(DIR + "ramp_decay_flux.csv");
-        FixtureAudit.checkProvenance(table, "gen_ramp_decay.py", DIR);
-        FixtureAudit.checkCoverage(table, FixtureAudit.leastRows(40, 0, 0, 0));
-        final FixtureCheck check = new FixtureCheck(table, CONTRACT).withConditionedSubnormals();
-        for (Row r : table.rows()) {
-            check.check(r, "third, decay", ramp(r).value(r.getDouble("x"), r.getDouble("t")));
-        }
-        check.finish();
+        checkEveryRow("ramp_decay_flux.csv", "gen_ramp_decay.py",
+            FixtureAudit.leastRows(40, 0, 0, 0), "third, decay");
     }
 
     @Test
     void firstTypeWithFlowTowardsTheInletMatchesItsFixture() {
         // gen_ramp_upstream.py: v < 0, the same independent route (Duhamel quadrature at 45+
         // digits), points within 0.5, 5 and 30 layer widths D/|v| of the inlet
-        final ReferenceTable table = ReferenceTable.load(DIR + "ramp_upstream.csv");
-        FixtureAudit.checkProvenance(table, "gen_ramp_upstream.py", DIR);
-        FixtureAudit.checkCoverage(table, FixtureAudit.leastRows(60, 0, 6, 0));
+        checkEveryRow("ramp_upstream.csv", "gen_ramp_upstream.py",
+            FixtureAudit.leastRows(60, 0, 6, 0), "first, v < 0");
+    }
+
+    private static void checkEveryRow(String file, String generator,
+                                      Map<Flag, Integer> least, String label) {
+        final ReferenceTable table = ReferenceTable.load(DIR + file);
+        FixtureAudit.checkProvenance(table, generator, DIR);
+        FixtureAudit.checkCoverage(table, least);
         final FixtureCheck check = new FixtureCheck(table, CONTRACT).withConditionedSubnormals();
         for (Row r : table.rows()) {
-            check.check(r, "first, v < 0", ramp(r).value(r.getDouble("x"), r.getDouble("t")));
+            check.check(r, label, ramp(r).value(r.getDouble("x"), r.getDouble("t")));
         }
         check.finish();
     }
