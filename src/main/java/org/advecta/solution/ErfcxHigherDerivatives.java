@@ -1,5 +1,7 @@
 package org.advecta.solution;
 
+import org.advecta.internal.Chebyshev;
+
 /**
  * The second to fifth derivatives of erfcx on [−1, 10), each scaled to be positive,
  * <pre>
@@ -67,7 +69,7 @@ final class ErfcxHigherDerivatives {
         final boolean isNear = z < SPLIT;
         final double c = isNear ? 2 : 1;
         final int k = isNear ? kNear : kFar;
-        final double series = isNear ? clenshaw(near, z) : clenshaw(far, inverse(z));
+        final double series = isNear ? Chebyshev.sum(near, z) : Chebyshev.sum(far, inverse(z));
         final double w = z + c;
         final double bv = w - z;
         final double werr = (z - (w - bv)) + (c - bv);
@@ -85,19 +87,6 @@ final class ErfcxHigherDerivatives {
     /** The image in [−1, 1] of y = 1/z ∈ [1/10, 1]. */
     private static double inverse(double z) {
         return (2 / z - (Y_LOW + Y_HIGH)) / (Y_HIGH - Y_LOW);
-    }
-
-    /** Σ c_k T_k(s), s ∈ [−1, 1], by Clenshaw's recurrence. */
-    private static double clenshaw(double[] c, double s) {
-        final double s2 = 2 * s;
-        double b1 = 0;
-        double b2 = 0;
-        for (int k = c.length - 1; k >= 1; k--) {
-            final double b0 = Math.fma(s2, b1, c[k] - b2);
-            b2 = b1;
-            b1 = b0;
-        }
-        return Math.fma(s, b1, c[0] - b2);
     }
 
     // PSI_FAR, max relative truncation error 5.07e-25

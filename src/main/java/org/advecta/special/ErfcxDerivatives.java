@@ -1,5 +1,6 @@
 package org.advecta.special;
 
+import org.advecta.internal.Chebyshev;
 import org.apache.commons.numbers.gamma.Erfcx;
 
 /**
@@ -86,18 +87,9 @@ final class ErfcxDerivatives {
         -6.381275364026076e-20,
         6.187367232455739e-21};
 
-    /** Σ c_k T_k(s) with s the image of y in [−1, 1], by Clenshaw's recurrence. */
+    /** Σ c_k T_k(s) with s the image of y in [−1, 1]. */
     private static double clenshaw(double[] c, double y) {
-        final double s = (2 * y - (Y_LOW + Y_HIGH)) / (Y_HIGH - Y_LOW);
-        final double s2 = 2 * s;
-        double b1 = 0;
-        double b2 = 0;
-        for (int k = c.length - 1; k >= 1; k--) {
-            final double b0 = Math.fma(s2, b1, c[k] - b2);
-            b2 = b1;
-            b1 = b0;
-        }
-        return Math.fma(s, b1, c[0] - b2);
+        return Chebyshev.sum(c, (2 * y - (Y_LOW + Y_HIGH)) / (Y_HIGH - Y_LOW));
     }
 
     /** From here on φ and ψ come from the asymptotic series. */
