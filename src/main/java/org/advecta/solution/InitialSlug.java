@@ -103,30 +103,9 @@ public final class InitialSlug extends AbstractSolution1D {
     private double value(double x, double t, double inverseLength) {
         final double m = (x - Math.fma(drift, t, middle)) * inverseLength;
         final double h = halfWidth * inverseLength;
-        final double am = Math.abs(m);
-        final double alpha = am - h;
-        if (alpha >= ONE_SIDE_FROM && 8 * am * h >= 1) {
-            return c0 * oneSide(am, h, alpha, t);
-        }
         final double diff = ErrorFunctions.erfDifferenceCentred(m, h);
         return c0 * (0.5 * diff * Math.exp(decayExponent(t)));
     }
-
-    /**
-     * Both ends on one side of the point, past erf = ±1/2 (α = |m| − h ≥ 0.477): the erf
-     * difference is erfc(α) − erfc(β) = e^{−α²}[erfcx(α) − e^{−4|m|h}·erfcx(β)], β = |m| + h
-     * (β² − α² = 4|m|h), and e^{−α²} joins the decay in one exponential, α² carried exactly
-     * ({@link ScaledExp}): one exponential fewer than two erfc and the decay. The bracket
-     * loses at most 1/(1 − e^{−1/2}) ≈ 2.5 to cancellation when 8|m|h ≥ 1 (erfcx decreases).
-     */
-    private double oneSide(double am, double h, double alpha, double t) {
-        final double bracket = ErrorFunctions.erfcx(alpha)
-            - Math.exp(-4 * am * h) * ErrorFunctions.erfcx(am + h);
-        return ScaledExp.value(0.5 * bracket, decayExponent(t), alpha);
-    }
-
-    /** erf(x) = 1/2 here: from this α on both erf values are nearer ±1 than 0. */
-    private static final double ONE_SIDE_FROM = 0.4769362762044697;
 
     @Override
     double gradientAt(double x, double t) {

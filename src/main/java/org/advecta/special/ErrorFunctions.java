@@ -146,8 +146,26 @@ public final class ErrorFunctions {
             && (am - h < ERFC_FROM || 8 * am * h < 1)) {
             return narrowErfDifference(m, h);
         }
-        return ErfDifference.value(m - h, m + h);
+        return wideErfDifference(m - h, m + h);
     }
+
+    /**
+     * erf(b) − erf(a) for a ≤ b, with the branches of Commons Numbers' ErfDifference.value
+     * (the same doubles): erfc values of the tail arguments where both lie beyond erf = ±1/2
+     * on one side, else erf values. Written out because that method's recursive call (for
+     * a &gt; b, which cannot occur here) kept the JIT from inlining it: 5 % of a slug's
+     * time (JMH, 1024 points around the front).
+     */
+    private static double wideErfDifference(double a, double b) {
+        if (a < -ERF_DIFFERENCE_CRITICAL) {
+            return b < 0 ? Erfc.value(-b) - Erfc.value(-a) : Erf.value(b) - Erf.value(a);
+        }
+        return b > ERF_DIFFERENCE_CRITICAL && a > 0 ? Erfc.value(a) - Erfc.value(b)
+            : Erf.value(b) - Erf.value(a);
+    }
+
+    /** The switch of Commons Numbers 1.2's ErfDifference (its X_CRIT, 1 ulp above ERFC_FROM). */
+    private static final double ERF_DIFFERENCE_CRITICAL = 0.47693627620446993;
 
     /**
      * The derivative of the scaled complementary error function,
