@@ -34,9 +34,18 @@ class SolutionReferenceTest {
     private static final String DIR = "fixtures/solution/";
     private static final Tolerance CONDITIONED = Tolerance.conditioned(16, 2);
 
+    /**
+     * Files written by a generator of their own (which takes its formulas from
+     * gen_solutions.py): the flux-inlet pulse after its end under strong decay, near the
+     * inlet, where the pulse gradient integrates the impulse response (a property try found
+     * it off by 2e-10 relative there).
+     */
+    private static final Map<String, String> GENERATORS =
+        Map.of("third_type_pulse_decay.csv", "gen_pulse_decay.py");
+
     static Stream<String> files() {
         return Stream.of("initial_step.csv", "initial_slug.csv", "initial_gaussian.csv",
-            "first_type_inlet.csv", "third_type_inlet.csv")
+            "first_type_inlet.csv", "third_type_inlet.csv", "third_type_pulse_decay.csv")
             .filter(f -> ReferenceTable.exists(DIR + f));
     }
 
@@ -45,8 +54,9 @@ class SolutionReferenceTest {
     void familyMatchesTheReference(String file) {
         final ReferenceTable table = ReferenceTable.load(DIR + file);
         // provenance: generator, mpmath version, precision, date, and the checks it made
-        assertEquals("gen_solutions.py", table.header("generator").orElse(null));
-        assertTrue(ReferenceTable.exists(DIR + "gen_solutions.py"));
+        final String generator = GENERATORS.getOrDefault(file, "gen_solutions.py");
+        assertEquals(generator, table.header("generator").orElse(null));
+        assertTrue(ReferenceTable.exists(DIR + generator));
         for (String key : new String[] {"mpmath", "working precision", "date"}) {
             assertTrue(table.header(key).filter(v -> !v.isBlank()).isPresent(),
                 file + ": header must record the " + key);
@@ -56,13 +66,32 @@ class SolutionReferenceTest {
         // coverage: an empty or truncated fixture must not pass silently
         final Map<Flag, Integer> counts = table.flagCounts();
         assertTrue(counts.getOrDefault(Flag.NORMAL, 0) >= 100, file + ": too few normal rows");
-        final FixtureCheck check = new FixtureCheck(table, CONDITIONED)
+        final FixtureCheck check = new FixtureCheck(table, tolerance(file))
             .withConditionedSubnormals();
         for (Row row : table.rows()) {
             check.check(row, row.get("quantity"), evaluate(file, row));
         }
         check.finish();
     }
+
+    /**
+     * The contract, except where {@link ThirdTypeInlet} documents an exception: the gradient
+     * of a pulse after its end, under decay much stronger than advection near the inlet,
+     * where both of its cancellation-free routes lose digits (the rows of case
+     * pulse_decay_cancelling), is held to 450 ULP (at most 1e−13 relative) there.
+     */
+    private static Tolerance tolerance(String file) {
+        if (!"third_type_pulse_decay.csv".equals(file)) {
+            return CONDITIONED;
+        }
+        return row -> "pulse_decay_cancelling".equals(row.get("case"))
+            && "gradient".equals(row.get("quantity"))
+            ? Math.max(CANCELLING_PULSE_GRADIENT_ULPS, CONDITIONED.ulps(row))
+            : CONDITIONED.ulps(row);
+    }
+
+    /** ThirdTypeInlet's stated bound for its exception: 450 ULP ≤ 450·2⁻⁵² ≈ 1e−13 relative. */
+    private static final double CANCELLING_PULSE_GRADIENT_ULPS = 450;
 
     private static double evaluate(String file, Row r) {
         final Solution1D s = solution(file, r);
