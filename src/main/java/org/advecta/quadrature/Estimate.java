@@ -13,6 +13,11 @@ import org.advecta.internal.Checks;
  * truncated tails and the rounding of the exponents; the tests check that the exact value
  * lies within it); for the routes of {@code org.advecta.convolution} a realistic estimate
  * (the tests check that it exceeds the true error and stays within 100 times it).
+ *
+ * <p>Both are relative in origin: for a value below {@link Double#MIN_NORMAL} they can
+ * underflow to 0 and do not cover the absolute rounding of the subnormal range, a few
+ * {@link Double#MIN_VALUE} (the tests hold such values to 4 MIN_VALUE beyond the error, as
+ * the reference fixtures hold subnormal results).
  */
 public final class Estimate {
 
