@@ -37,8 +37,8 @@ class SolutionReferenceTest {
     /**
      * Files written by a generator of their own (which takes its formulas from
      * gen_solutions.py): the flux-inlet pulse after its end under strong decay, near the
-     * inlet, where the pulse gradient integrates the impulse response (a property try found
-     * it off by 2e-10 relative there).
+     * inlet, where the pulse gradient takes its last routes (a property try found it off by
+     * 2e-10 relative there, and a wider grid up to 32 times max(16, 2κ) at μ = 1000).
      */
     private static final Map<String, String> GENERATORS =
         Map.of("third_type_pulse_decay.csv", "gen_pulse_decay.py");
@@ -76,22 +76,21 @@ class SolutionReferenceTest {
 
     /**
      * The contract, except where {@link ThirdTypeInlet} documents an exception: the gradient
-     * of a pulse after its end, under decay much stronger than advection near the inlet,
-     * where both of its cancellation-free routes lose digits (the rows of case
-     * pulse_decay_cancelling), is held to 450 ULP (at most 1e−13 relative) there.
+     * of a flux-inlet pulse after its end, at the five points (case pulse_gradient_exception)
+     * where a grid of 25 200 and 2 000 random points against mpmath found it outside
+     * max(16, 2κ) ULP, is held to three times that.
      */
     private static Tolerance tolerance(String file) {
         if (!"third_type_pulse_decay.csv".equals(file)) {
             return CONDITIONED;
         }
-        return row -> "pulse_decay_cancelling".equals(row.get("case"))
+        return row -> "pulse_gradient_exception".equals(row.get("case"))
             && "gradient".equals(row.get("quantity"))
-            ? Math.max(CANCELLING_PULSE_GRADIENT_ULPS, CONDITIONED.ulps(row))
-            : CONDITIONED.ulps(row);
+            ? PULSE_GRADIENT_EXCEPTION * CONDITIONED.ulps(row) : CONDITIONED.ulps(row);
     }
 
-    /** ThirdTypeInlet's stated bound for its exception: 450 ULP ≤ 450·2⁻⁵² ≈ 1e−13 relative. */
-    private static final double CANCELLING_PULSE_GRADIENT_ULPS = 450;
+    /** ThirdTypeInlet's stated factor for its exception (measured: 2.94 at worst). */
+    private static final double PULSE_GRADIENT_EXCEPTION = 3;
 
     private static double evaluate(String file, Row r) {
         final Solution1D s = solution(file, r);
