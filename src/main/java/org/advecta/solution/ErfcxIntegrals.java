@@ -106,7 +106,7 @@ final class ErfcxIntegrals {
     }
 
     /** Below this, erfcx overflows (2·exp(26.6²) &gt; MAX_VALUE); −26 leaves a margin. */
-    private static final double ERFCX_OVERFLOW = -26;
+    static final double ERFCX_OVERFLOW = -26;
 
     /**
      * The mean of φ over the interval between p and q (either order), =

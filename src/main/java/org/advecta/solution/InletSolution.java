@@ -209,11 +209,16 @@ abstract class InletSolution extends AbstractSolution1D {
      * complements, whose gradients do not hold the steady state's (the same difference).
      */
     private double shiftedGradientDifference(double x, double t1, double t) {
-        if (!response.pastHalfSteady(x, t)
-            && response.value(x, t, 0.0) <= 0.5 * response.steady(x)) {
+        if (beforeFront(x, t)) {
             return response.gradient(x, t, 0.0) - response.gradient(x, t1, 0.0);
         }
         return response.complementGradient(x, t1) - response.complementGradient(x, t);
+    }
+
+    /** Whether R(t) is below half its steady state and the front has not passed. */
+    private boolean beforeFront(double x, double t) {
+        return !response.pastHalfSteady(x, t)
+            && response.value(x, t, 0.0) <= 0.5 * response.steady(x);
     }
 
     /**
@@ -239,8 +244,7 @@ abstract class InletSolution extends AbstractSolution1D {
         final double p1 = companionPulse(x, t);
         final double diff = p3 - p1;
         final double identityLoss = (Math.abs(p3) + Math.abs(p1)) / Math.abs(diff);
-        final boolean early = !response.pastHalfSteady(x, t)
-            && response.value(x, t, 0.0) <= 0.5 * response.steady(x);
+        final boolean early = beforeFront(x, t);
         final double now = early ? response.gradient(x, t, 0.0)
             : -response.complementGradient(x, t);
         final double before = early ? response.gradient(x, t1, 0.0)
@@ -260,6 +264,7 @@ abstract class InletSolution extends AbstractSolution1D {
         }
         return integrateAdaptive(x, t1, t, true, 0);
     }
+
     /** Whether the impulse response's gradient has one sign at t₁, the middle and t. */
     private boolean gradientOneSigned(double x, double t1, double t) {
         final double a = response.densityGradient(x, t1);

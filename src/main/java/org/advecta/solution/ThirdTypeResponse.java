@@ -240,7 +240,7 @@ final class ThirdTypeResponse implements UnitResponse {
     private double fromFlux(Point p, double t, double published, double publishedLoss) {
         final double pu = p.s.scaled(uR * t);
         final double a = pu - p.q;
-        if (a < ERFCX_OVERFLOW) {
+        if (a < ErfcxIntegrals.ERFCX_OVERFLOW) {
             return published;
         }
         final double erfcxA = ErrorFunctions.erfcx(a);
@@ -272,9 +272,6 @@ final class ThirdTypeResponse implements UnitResponse {
         final double q = strongLoss <= weakLoss ? strong : weak;
         return v / d * ScaledExp.value(q, -muR * t, p.av);
     }
-
-    /** Below this, erfcx overflows (2·exp(26.6²) &gt; MAX_VALUE); −26 leaves a margin. */
-    private static final double ERFCX_OVERFLOW = -26;
 
     /** The bracket of the gradient (see {@link #gradient}); ≤ 0. */
     private double inner(Point p, double t) {
