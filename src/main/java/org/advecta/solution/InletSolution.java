@@ -232,7 +232,7 @@ abstract class InletSolution extends AbstractSolution1D {
      * their contracts. So, of that identity and the difference of the shifted gradients (of
      * the complements' gradients after the front, in closed form from the same identity
      * under strong decay, see ThirdTypeResponse), the one whose terms cancel less, while that
-     * is at most a factor {@link #IDENTITY_LOSS}; else the impulse response's gradient
+     * is at most a factor {@link #MAX_ROUTE_LOSS}; else the impulse response's gradient
      * integrated over a narrow [t₁, t] where it keeps one sign, else on pieces. Checked
      * against mpmath on a grid of 25 200 points and 2 000 random ones (gen_pulse_decay.py):
      * five gradients outside max(16, 2κ) ULP, at most 2.94 times it (ThirdTypeInlet states
@@ -251,8 +251,8 @@ abstract class InletSolution extends AbstractSolution1D {
             : -response.complementGradient(x, t1);
         final double g = now - before;
         final double timeLoss = (Math.abs(now) + Math.abs(before)) / Math.abs(g);
-        final boolean identityOk = identityLoss <= IDENTITY_LOSS;
-        final boolean timeOk = timeLoss <= IDENTITY_LOSS;
+        final boolean identityOk = identityLoss <= MAX_ROUTE_LOSS;
+        final boolean timeOk = timeLoss <= MAX_ROUTE_LOSS;
         if (identityOk && !(timeOk && timeLoss < identityLoss)) {
             return velocity * diff / dispersion;
         }
@@ -274,7 +274,7 @@ abstract class InletSolution extends AbstractSolution1D {
     }
 
     /** Most cancellation the routes of {@link #fluxInletPulseGradient} may suffer. */
-    private static final double IDENTITY_LOSS = 64;
+    private static final double MAX_ROUTE_LOSS = 64;
 
     /**
      * The unit pulse response of the first-type inlet with the same parameters, for the flux

@@ -38,7 +38,7 @@ class SolutionReferenceTest {
      * Files written by a generator of their own (which takes its formulas from
      * gen_solutions.py): the flux-inlet pulse after its end under strong decay, near the
      * inlet, where the pulse gradient takes its last routes (a property try found it off by
-     * 2e-10 relative there, and a wider grid up to 32 times max(16, 2κ) at μ = 1000).
+     * 2e-10 relative there, and a wider grid up to 1135 times max(16, 2κ) at μ up to 1000).
      */
     private static final Map<String, String> GENERATORS =
         Map.of("third_type_pulse_decay.csv", "gen_pulse_decay.py");
