@@ -1,6 +1,6 @@
 package org.advecta.plume;
 
-import org.advecta.internal.HermiteSeries;
+import org.advecta.internal.CentredErfSeries;
 import org.advecta.internal.ScaledExp;
 import org.advecta.special.ErrorFunctions;
 
@@ -138,16 +138,15 @@ final class WallStrips {
      * E(p, h) = e^(p²)·[erf(p + 2h) − erf(p)] for p ≥ 0, h ≥ 0, without cancellation: the
      * scaled mass of the Gaussian over [p, p + 2h], centre m = p + h.
      * <pre>
-     * narrow (h &lt; 1/2, 4mh &lt; 1):  (4h/√π)·e^(−h(2p + h))·Σ_j T_(2j)/(2j + 1),
-     *     T_0 = 1, T_1 = 2mh, T_(n+1) = (2mh·T_n − 2h²·T_(n−1))/(n + 1)
+     * narrow (h &lt; 1/2, 4mh &lt; 1):  (4h/√π)·e^(−2mh)·Σ_j (2mh)^(2j)/(2j)!·g_j,
+     *     g_j = (1 + 2h²·g_(j+1))/(2j + 1)
      * otherwise (then 4mh ≥ 1):     erfcx(p) − e^(−4mh)·erfcx(p + 2h)
      * </pre>
-     * The series is the Taylor series of erf about m in Hermite polynomials (the one of
-     * {@link HermiteSeries} and {@link ErrorFunctions#erfDifferenceCentred}, Abramowitz &amp; Stegun 7.1.19, recalled),
-     * multiplied by e^(p²) (e^(p² − m²) = e^(−h(2p + h))); its terms fall like 2⁻ⁿ/√(n!) and
-     * its sum lies in [e^(−2mh − h²), e^(2mh)], so it cannot cancel. In the erfc form
-     * (A&amp;S 7.1.2) the second term is at most e^(−1) of the first (erfcx decreases), a loss
-     * of at most a factor 1.6.
+     * The series is the one of {@link CentredErfSeries} (and of
+     * {@link ErrorFunctions#erfDifferenceCentred}) multiplied by e^(p²)
+     * (e^(p² − m² − h²) = e^(−2mh)); its terms are all positive, so it cannot cancel. In
+     * the erfc form (A&amp;S 7.1.2) the second term is at most e^(−1) of the first (erfcx
+     * decreases), a loss of at most a factor 1.6.
      */
     static double scaledDifference(double p, double h) {
         if (h == 0) {
@@ -155,8 +154,7 @@ final class WallStrips {
         }
         final double m = p + h;
         if (h < 0.5 && 4 * m * h < 1) {
-            final double sum = HermiteSeries.centredSum(2 * m * h, 2 * h * h);
-            return FOUR_OVER_SQRT_PI * h * sum * Math.exp(-h * (2 * p + h));
+            return FOUR_OVER_SQRT_PI * h * CentredErfSeries.sum(m, h) * Math.exp(-2 * h * m);
         }
         final double q = p + 2 * h;
         return ErrorFunctions.erfcx(p) - scaleDown(ErrorFunctions.erfcx(q), -2 * h * (p + q));

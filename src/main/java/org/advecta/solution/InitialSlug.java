@@ -18,8 +18,9 @@ import org.advecta.transport.TransportParameters;
  *
  * <p>The box convolved with the free-space kernel (Crank 1975, eq. 2.15 (number recalled), in the moving
  * coordinate). The difference of erf values is formed from the centre m and half-width h
- * ({@link ErrorFunctions#erfDifferenceCentred(double, double)}), so it does not cancel in the
- * tails (both erf near ±1) nor for a thin slug (b − a ≪ L). The gradient uses
+ * ({@link ErrorFunctions#erfDifferenceCentred(double, double, double)}, which also applies the
+ * decay), so it does not cancel in the tails (both erf near ±1) nor for a thin slug
+ * (b − a ≪ L). The gradient uses
  * exp(−α²) − exp(−β²) = exp(−β²)·expm1(β² − α²) with β² − α² = −4mh computed from m and h.
  *
  * <p>At t = 0 the value is C₀ inside, 0 outside, C₀/2 at a and b; the gradient is 0 except
@@ -103,8 +104,8 @@ public final class InitialSlug extends AbstractSolution1D {
     private double value(double x, double t, double inverseLength) {
         final double m = (x - Math.fma(drift, t, middle)) * inverseLength;
         final double h = halfWidth * inverseLength;
-        final double diff = ErrorFunctions.erfDifferenceCentred(m, h);
-        return c0 * (0.5 * diff * Math.exp(decayExponent(t)));
+        // the decay joins the difference's own exponential where its series serves
+        return c0 * (0.5 * ErrorFunctions.erfDifferenceCentred(m, h, decayExponent(t)));
     }
 
     @Override

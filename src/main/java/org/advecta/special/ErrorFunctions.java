@@ -1,6 +1,6 @@
 package org.advecta.special;
 
-import org.advecta.internal.HermiteSeries;
+import org.advecta.internal.CentredErfSeries;
 import org.advecta.internal.ScaledExp;
 import org.apache.commons.numbers.gamma.Erf;
 import org.apache.commons.numbers.gamma.ErfDifference;
@@ -119,13 +119,10 @@ public final class ErrorFunctions {
      * erf(m + h) − erf(m − h) = (2/√π) ∫ exp(−s²) ds over [m − h, m + h]
      * </pre>
      *
-     * <p>Narrow intervals off the origin (h &lt; 1/2 and 4|m|h &lt; 1, so that exp(−s²) changes
-     * by less than a factor e across them, and |m| &gt; 3h, and 8|m|h &lt; 1 where both ends
-     * exceed the x of erf(x) = 1/2) use the Taylor series of erf about m (in Hermite
-     * polynomials, summed to 2⁻⁶⁰ relative). The others use {@link #erfDifference(double, double)},
-     * which then cannot cancel badly: for |m| ≤ 3h the two erf values either differ in sign
-     * or differ by at least a third of their sum, and two erfc values beyond erf = 1/2 with
-     * 8|m|h ≥ 1 differ by at least a quarter of theirs.
+     * <p>For h ≤ 1/2 and |m|·h ≤ 1 it is a series of positive terms times e^{−m² − h²},
+     * with m² split exactly; otherwise one exponential times a difference of erfcx values
+     * that loses at most a factor 2.2, or a sum of erf values (see
+     * {@link #erfDifferenceCentred(double, double, double)}, of which this is s = 0).
      *
      * <p>Special cases: NaN if m or h is NaN or h &lt; 0; 0 for h = 0; erf(±∞)
      * differences for infinite h.
@@ -138,34 +135,64 @@ public final class ErrorFunctions {
      * @return erf(m + h) − erf(m − h)
      */
     public static double erfDifferenceCentred(double m, double h) {
-        if (!(h >= 0)) {
-            return Double.NaN;
-        }
-        final double am = Math.abs(m);
-        if (h < NARROW_HALF_WIDTH && 4 * am * h < 1 && am > 3 * h
-            && (am - h < ERFC_FROM || 8 * am * h < 1)) {
-            return narrowErfDifference(m, h);
-        }
-        return wideErfDifference(m - h, m + h);
+        return erfDifferenceCentred(m, h, 0.0);
     }
 
     /**
-     * erf(b) − erf(a) for a ≤ b, with the branches of Commons Numbers' ErfDifference.value
-     * (the same doubles): erfc values of the tail arguments where both lie beyond erf = ±1/2
-     * on one side, else erf values. Written out because that method's recursive call (for
-     * a &gt; b, which cannot occur here) kept the JIT from inlining it: 5 % of a slug's
-     * time (JMH, 1024 points around the front).
+     * The difference erf(m + h) − erf(m − h) scaled by e^s, for a solution that carries a
+     * factor such as the decay e^{−μt/R}: e^s joins the exponential the difference needs
+     * anyway, so the scaled difference costs one exponential where the product of the naive
+     * formula costs three.
+     *
+     * <pre>
+     * e^s·[erf(m + h) − erf(m − h)] = (4h/√π)·e^{s − m² − h²}·Σ_j (2mh)^{2j}/(2j)!·g_j,
+     * g_j = e^{h²} ∫₀¹ u^{2j} e^{−h²u²} du = (1 + 2h²·g_{j+1})/(2j + 1)
+     * </pre>
+     *
+     * <p>(substitute s = m + hu in the integral above; the odd powers of u cancel over
+     * [−1, 1], and g_j follows by parts). For h ≤ 1/2 and |m|·h ≤ 1 that series is taken
+     * ({@code CentredErfSeries}): its terms are all positive and its exponent is formed with
+     * m² split exactly. Otherwise (the difference is even in m; lo = |m| − h, hi = |m| + h),
+     * when both ends lie on one side of 0 it is e^{s − lo²}·[erfcx(lo) − e^{−4|m|h}·erfcx(hi)]
+     * (A&amp;S 7.1.2, one exponential for both erfc values, lo² = m² − h(2|m| − h) so that m²
+     * is split exactly), whose second term is at most e^{−1} of the first (erfcx decreases,
+     * and 4|m|h ≥ 1 there), a loss of at most a factor 2.2 (for lo &lt; 1/2 the two erfc values
+     * themselves, with the same loss); when they lie on both sides it is
+     * e^s·[erf(hi) + erf(−lo)], which cannot cancel.
+     *
+     * <p>Special cases: NaN if m, h or s is NaN or h &lt; 0; 0 for h = 0; erf(±∞)
+     * differences for infinite h; +∞ where the scaled result exceeds
+     * {@link Double#MAX_VALUE}.
+     *
+     * <p>Accuracy: within max(16, 2κ) ULP of the exact result wherever it is a normal double,
+     * κ being its condition number with respect to m, h and s.
+     *
+     * @param m the centre of the interval
+     * @param h the half-width, ≥ 0
+     * @param s the logarithm of the scale
+     * @return e^s·[erf(m + h) − erf(m − h)]
      */
-    private static double wideErfDifference(double a, double b) {
-        if (a < -ERF_DIFFERENCE_CRITICAL) {
-            return b < 0 ? Erfc.value(-b) - Erfc.value(-a) : Erf.value(b) - Erf.value(a);
+    public static double erfDifferenceCentred(double m, double h, double s) {
+        if (!(h > 0)) {
+            return h == 0 && m == m ? 0.0 : Double.NaN;
         }
-        return b > ERF_DIFFERENCE_CRITICAL && a > 0 ? Erfc.value(a) - Erfc.value(b)
-            : Erf.value(b) - Erf.value(a);
+        final double am = Math.abs(m);
+        if (h <= CentredErfSeries.MAX_HALF_WIDTH
+            && am * h <= CentredErfSeries.MAX_CENTRE_TIMES_HALF_WIDTH) {
+            // h² ≤ 1/4 is rounded by at most 2⁻⁵⁵ absolute: it can join s unsplit
+            return ScaledExp.value(2 * h * TWO_OVER_SQRT_PI * CentredErfSeries.sum(m, h),
+                s - h * h, m);
+        }
+        final double lo = am - h;
+        if (lo > 0) {
+            if (lo < ERFCX_BY_RATIONAL) {
+                return ScaledExp.value(Erfc.value(lo) - Erfc.value(am + h), s, 0.0);
+            }
+            final double bracket = Erfcx.value(lo) - Math.exp(-4 * am * h) * Erfcx.value(am + h);
+            return ScaledExp.value(bracket, s + h * (2 * am - h), am);
+        }
+        return ScaledExp.value(Erf.value(am + h) - Erf.value(lo), s, 0.0);
     }
-
-    /** The switch of Commons Numbers 1.2's ErfDifference (its X_CRIT, 1 ulp above ERFC_FROM). */
-    private static final double ERF_DIFFERENCE_CRITICAL = 0.47693627620446993;
 
     /**
      * The derivative of the scaled complementary error function,
@@ -209,29 +236,14 @@ public final class ErrorFunctions {
         return 2 * ErfcxDerivatives.psi(x);
     }
 
-    /**
-     * From here on (about the x where erf(x) = 1/2) Commons Numbers' ErfDifference takes the
-     * difference of erfc values, which loses at most a factor coth(2|m|h) ≤ 4 when
-     * 8|m|h ≥ 1.
-     */
-    private static final double ERFC_FROM = 0.4769362762044697;
-
-    /** Half-widths below this may use the series of {@link #erfDifferenceCentred}. */
-    private static final double NARROW_HALF_WIDTH = 0.5;
     /** 2/√π. */
     private static final double TWO_OVER_SQRT_PI = 1.1283791670955126;
-
     /**
-     * erf(m + h) − erf(m − h) for a narrow interval off the origin (h &lt; 1/2, 4|m|h &lt; 1):
-     * (4h/√π)·e^{−m²}·Σ_j T_{2j}/(2j + 1), the Taylor series of erf about m in Hermite
-     * polynomials ({@link HermiteSeries}, Abramowitz &amp; Stegun 7.1.19), which cannot cancel.
-     * One exponential (with its exponent in double-double), against 20 for a 10-point
-     * quadrature.
+     * Commons Numbers 1.2 forms erfcx(x) below 1/2 from erfc with StrictMath.expm1, which
+     * the JIT does not replace by an intrinsic (JMH stack profile of the slug): there the
+     * two erfc values are subtracted instead, with the same loss.
      */
-    private static double narrowErfDifference(double m, double h) {
-        final double sum = HermiteSeries.centredSum(2 * m * h, 2 * h * h);
-        return ScaledExp.value(2 * h * TWO_OVER_SQRT_PI * sum, 0.0, m);
-    }
+    private static final double ERFCX_BY_RATIONAL = 0.5;
 
     /**
      * The natural logarithm of erfc(x), finite for every finite x, including where erfc(x)
