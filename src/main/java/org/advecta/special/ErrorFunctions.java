@@ -154,8 +154,8 @@ public final class ErrorFunctions {
      * ({@code CentredErfSeries}): its terms are all positive and its exponent is formed with
      * m² split exactly. Otherwise (the difference is even in m; lo = |m| − h, hi = |m| + h),
      * when both ends lie on one side of 0 it is e^{s − lo²}·[erfcx(lo) − e^{−4|m|h}·erfcx(hi)]
-     * (A&amp;S 7.1.2, one exponential for both erfc values, lo² = m² − h(2|m| − h) so that m²
-     * is split exactly), whose second term is at most e^{−1} of the first (erfcx decreases,
+     * (A&amp;S 7.1.2, one exponential for both erfc values; lo² from the rounded lo, as erfc(lo)
+     * would: forming it as m² − h(2|m| − h) cancels for wide intervals), whose second term is at most e^{−1} of the first (erfcx decreases,
      * and 4|m|h ≥ 1 there), a loss of at most a factor 2.2 (for lo &lt; 1/2 the two erfc values
      * themselves, with the same loss); when they lie on both sides it is
      * e^s·[erf(hi) + erf(−lo)], which cannot cancel.
@@ -189,7 +189,7 @@ public final class ErrorFunctions {
                 return ScaledExp.value(Erfc.value(lo) - Erfc.value(am + h), s, 0.0);
             }
             final double bracket = Erfcx.value(lo) - Math.exp(-4 * am * h) * Erfcx.value(am + h);
-            return ScaledExp.value(bracket, s + h * (2 * am - h), am);
+            return ScaledExp.value(bracket, s, lo);
         }
         return ScaledExp.value(Erf.value(am + h) - Erf.value(lo), s, 0.0);
     }
