@@ -44,7 +44,8 @@ final class SegmentIntegrals {
 
     /** Beyond |y| = 40 the factor exp(−y²) &lt; 1e-694 leaves nothing a sum of weights can see. */
     static final double FAR = 40;
-    /** The narrow regime's half-width limit (as in ErrorFunctions.erfDifferenceCentred). */
+    /** The narrow regime's half-width limit (the series of ErrorFunctions.erfDifferenceCentred
+     * serves up to this half-width too). */
     private static final double NARROW_HALF_WIDTH = 0.5;
     /** √π. */
     static final double SQRT_PI = 1.7724538509055160;
