@@ -14,13 +14,13 @@ package org.advecta.internal;
  * (the recurrence by parts). Every term is positive, so the sum cannot cancel, and the only
  * exponential, e^{−m² − h²}, is left to the caller, who can join a decay factor to it.
  *
- * <p>Why this form: it replaces the Taylor series in Hermite polynomials (Abramowitz &amp; Stegun
- * 7.1.19), whose up to 15 steps each waited on the one before and which needed its own
- * exponential; here the recurrence for g runs backwards, where it is stable (an error in g_{j+1} reaches g_j damped
- * by 2h²/(2j + 1)), from a start near its limit, for a fixed {@link #LAST} + 1 steps, and the
- * outer sum rides along by Horner's rule, both taken two steps at a time.
- * Truncation error, measured with mpmath on a 41 × 41 grid of (2mh)² ∈ [0, 4], h² ∈ [0, 1/4]:
- * below 0.007 ulp (0.81 ulp with one step fewer).
+ * <p>Why this form: it replaces the Taylor series in Hermite polynomials (Abramowitz &amp;
+ * Stegun 7.1.19), whose up to 15 steps each waited on the one before and which needed its own
+ * exponential. Here the recurrence for g runs backwards, where it is stable (an error in
+ * g_{j+1} reaches g_j damped by 2h²/(2j + 1)), from a start near its limit, for a fixed
+ * {@link #LAST} + 1 steps, and the outer sum rides along by Horner's rule, both taken two
+ * steps at a time. Truncation error, measured with mpmath on a 41 × 41 grid of
+ * (2mh)² ∈ [0, 4], h² ∈ [0, 1/4]: below 0.007 ulp (0.81 ulp with one step fewer).
  *
  * <p>Not exported from the module.
  */

@@ -18,8 +18,8 @@ import org.advecta.transport.TransportParameters;
  *
  * <p>The box convolved with the free-space kernel (Crank 1975, eq. 2.15 (number recalled), in the moving
  * coordinate). The difference of erf values is formed from the centre m and half-width h
- * ({@link ErrorFunctions#erfDifferenceCentred(double, double, double)}, which also applies the
- * decay), so it does not cancel in the tails (both erf near ±1) nor for a thin slug
+ * ({@link ErrorFunctions#erfDifferenceCentred(double, double, double)}, which also applies
+ * the decay), so it does not cancel in the tails (both erf near ±1) nor for a thin slug
  * (b − a ≪ L). The gradient uses
  * exp(−α²) − exp(−β²) = exp(−β²)·expm1(β² − α²) with β² − α² = −4mh computed from m and h.
  *

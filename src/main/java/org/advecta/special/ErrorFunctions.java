@@ -155,10 +155,10 @@ public final class ErrorFunctions {
      * m² split exactly. Otherwise (the difference is even in m; lo = |m| − h, hi = |m| + h),
      * when both ends lie on one side of 0 it is e^{s − lo²}·[erfcx(lo) − e^{−4|m|h}·erfcx(hi)]
      * (A&amp;S 7.1.2, one exponential for both erfc values; lo² from the rounded lo, as erfc(lo)
-     * would: forming it as m² − h(2|m| − h) cancels for wide intervals), whose second term is at most e^{−1} of the first (erfcx decreases,
-     * and 4|m|h ≥ 1 there), a loss of at most a factor 2.2 (for lo &lt; 1/2 the two erfc values
-     * themselves, with the same loss); when they lie on both sides it is
-     * e^s·[erf(hi) + erf(−lo)], which cannot cancel.
+     * would: forming it as m² − h(2|m| − h) cancels for wide intervals), whose second term is
+     * at most e^{−1} of the first (erfcx decreases, and 4|m|h ≥ 1 there), a loss of at most a
+     * factor 2.2 (for lo &lt; 1/2 the two erfc values themselves, with the same loss); when
+     * they lie on both sides it is e^s·[erf(hi) + erf(−lo)], which cannot cancel.
      *
      * <p>Special cases: NaN if m, h or s is NaN or h &lt; 0; 0 for h = 0; erf(±∞)
      * differences for infinite h; +∞ where the scaled result exceeds
