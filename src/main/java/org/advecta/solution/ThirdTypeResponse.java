@@ -340,9 +340,13 @@ final class ThirdTypeResponse implements UnitResponse {
 
     @Override
     public double densityGradient(double x, double t) {
+        // ∂/∂x of the density's bracket φ(B) + Q·erfcx(B) against e^{−A²}, with ψ = erfcx − 2Bφ
+        // and B − A = 2P: 2[(2P − Q)·φ(B) − A·Q·erfcx(B)], both terms ≥ 0 behind the front
+        // (A ≤ 0, Q ≤ P); the sign change in τ lies where P < Q < 2P
         final Point p = new Point(x, t);
-        final double bracket = ErrorFunctions.erfcx(p.bv) * (1 - 2 * p.av * p.q)
-            - ErfcxIntegrals.psi(p.bv) - 2 * ErfcxIntegrals.phi(p.bv) * (p.av + p.q);
+        final double twoPMinusQ = p.s.scaled(2 * vR * t - x);
+        final double bracket = 2 * (twoPMinusQ * ErfcxIntegrals.phi(p.bv)
+            - p.av * p.q * ErrorFunctions.erfcx(p.bv));
         return ScaledExp.value(2 * p.pv / t * p.s.inverseLength() * bracket, -muR * t,
             p.av);
     }
