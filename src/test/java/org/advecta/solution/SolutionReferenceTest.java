@@ -66,31 +66,13 @@ class SolutionReferenceTest {
         // coverage: an empty or truncated fixture must not pass silently
         final Map<Flag, Integer> counts = table.flagCounts();
         assertTrue(counts.getOrDefault(Flag.NORMAL, 0) >= 100, file + ": too few normal rows");
-        final FixtureCheck check = new FixtureCheck(table, tolerance(file))
+        final FixtureCheck check = new FixtureCheck(table, CONDITIONED)
             .withConditionedSubnormals();
         for (Row row : table.rows()) {
             check.check(row, row.get("quantity"), evaluate(file, row));
         }
         check.finish();
     }
-
-    /**
-     * The contract, except where {@link ThirdTypeInlet} documents an exception: the gradient
-     * of a flux-inlet pulse after its end, at the five points (case pulse_gradient_exception)
-     * where a grid of 25 200 and 2 000 random points against mpmath found it outside
-     * max(16, 2κ) ULP, is held to three times that.
-     */
-    private static Tolerance tolerance(String file) {
-        if (!"third_type_pulse_decay.csv".equals(file)) {
-            return CONDITIONED;
-        }
-        return row -> "pulse_gradient_exception".equals(row.get("case"))
-            && "gradient".equals(row.get("quantity"))
-            ? PULSE_GRADIENT_EXCEPTION * CONDITIONED.ulps(row) : CONDITIONED.ulps(row);
-    }
-
-    /** ThirdTypeInlet's stated factor for its exception (measured: 2.94 at worst). */
-    private static final double PULSE_GRADIENT_EXCEPTION = 3;
 
     private static double evaluate(String file, Row r) {
         final Solution1D s = solution(file, r);
