@@ -65,7 +65,13 @@ public final class FirstTypeInlet extends InletSolution {
      * Returns the flux-averaged concentration c − (D/v)·∂c/∂x. For v &lt; 0 (solute entering
      * against the flow) its two terms nearly cancel, and for constant and exponential inputs
      * it is evaluated from a rewritten closed form whose terms share a sign; for pulses with
-     * v &lt; 0 it is the plain difference, accurate to about 1e-16·(|c| + |D/v·∂c/∂x|).
+     * v &lt; 0 it is the plain difference, accurate to about 1e-16·(|c| + |D/v·∂c/∂x|). For a
+     * pulse with v &gt; 0 the terms cancel behind the pulse's peak (where ∂c/∂x &gt; 0), and
+     * where they would lose more than a factor 2 the flux-averaged impulse response is
+     * integrated over the pulse's window instead. Against mpmath at 4 500 random points over
+     * wide ranges (first_type_pulse_wide.csv keeps a sample) it was within max(16, 2κ) ULP
+     * wherever the result is a normal double; the plain difference was up to 12.8 times
+     * outside.
      *
      * @param x position, ≥ 0
      * @param t time, ≥ 0
@@ -74,6 +80,9 @@ public final class FirstTypeInlet extends InletSolution {
      */
     @Override
     public double fluxAveraged(double x, double t) {
+        if (velocity > 0 && input.kind() == InletInput.Kind.PULSE) {
+            return pulseFluxAveraged(x, t);
+        }
         if (!(velocity < 0) || input.kind() == InletInput.Kind.PULSE || t == 0) {
             return super.fluxAveraged(x, t);
         }

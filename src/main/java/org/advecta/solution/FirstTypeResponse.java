@@ -236,6 +236,22 @@ final class FirstTypeResponse implements UnitResponse {
     }
 
     @Override
+    public double fluxAveragedDensity(double x, double t) {
+        // x/(t√π L)·e^{E} − (D/v)·e^{E}/(t√π L)·(1 − 2AQ), E = −μt/R − A², with
+        // (2D/v)·A·Q = (2D/v)·Q² − x/2 (Q·P = x·vt/(RL²) and L² = 4Dt/R):
+        // e^{E}/(t√π L)·[x/2 + (D/v)(2Q² − 1)], which changes sign once in t; 2Q² − 1 is
+        // formed as 2(Q − 1/√2)(Q + 1/√2), so that its zero costs no more than the rounding of Q
+        final Spread s = Spread.ofInverseLength(d, r, t);
+        final double q = s.scaled(x);
+        final double bracket = 0.5 * x + d / v * (2 * (q - SQRT_HALF) * (q + SQRT_HALF));
+        return ScaledExp.value(s.inverseLength() * bracket / (t * SQRT_PI), -muR * t,
+            s.scaled(x - vR * t));
+    }
+
+    /** √½. */
+    private static final double SQRT_HALF = Math.sqrt(0.5);
+
+    @Override
     public double flush(double x, double t) {
         // 1 − F₀ = (1 − e^{s1⁰}) + e^{s1⁰}·J(−A₀, B₀), u₀ = |v|, s1⁰ = min(v, 0)·x/D ≤ 0:
         // two non-negative terms.

@@ -53,6 +53,12 @@ interface UnitResponse {
     double densityGradient(double x, double t);
 
     /**
+     * Returns ∂R/∂t − (D/v)·∂²R/∂x∂t, the flux-averaged response to a unit impulse of input,
+     * in a form without the cancellation of that difference where it can be avoided.
+     */
+    double fluxAveragedDensity(double x, double t);
+
+    /**
      * Returns 1 − R₀(x, t), R₀ the response without decay: the fraction of a uniform initial
      * concentration still present (before decay) when the inlet holds zero.
      */
