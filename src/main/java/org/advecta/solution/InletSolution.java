@@ -147,8 +147,8 @@ abstract class InletSolution extends AbstractSolution1D {
      * R(t) − R(t − t₀), the response to a rectangular pulse (superposition in time), chosen
      * among three cancellation-free forms: quadrature of the impulse response over
      * [t − t₀, t] when that is narrow; the direct difference while R(t − t₀) ≤ R(t)/2; else
-     * the difference of the complements R(∞) − R, or, where that would lose more than one
-     * bit, quadrature of the impulse response on pieces (cheaper forms first). The direct
+     * the difference of the complements R(∞) − R, or, where that cancels, quadrature (see
+     * {@link #afterFront}; cheaper forms first). The direct
      * difference is no longer taken merely because R(t) is below half its steady state: at
      * the flux inlet's x = 0 the response starts high and rises slowly, and that difference
      * was 8.6 times outside max(16, 2κ) ULP.
@@ -185,10 +185,14 @@ abstract class InletSolution extends AbstractSolution1D {
     }
 
     /**
-     * The pulse from the complements, R(∞) − R(t − t₀) minus R(∞) − R(t), unless that would
-     * lose more than one bit, where the impulse response is integrated instead (on pieces, so
-     * also where the interval is not narrow or reaches x = 0: the flux inlet's pulse at the
-     * inlet was 24 ULP off, 1.3 times max(16, 2κ), from complements that cancel 8-fold).
+     * The pulse from the complements, R(∞) − R(t − t₀) minus R(∞) − R(t), while they cancel
+     * by at most {@link #MAX_ROUTE_LOSS}. Beyond that, the 10-point rule where the interval
+     * is narrow (complements cancelling 2.5-fold were 1.17 times outside max(16, 2κ) ULP at a
+     * pulse's tail under decay); else the complements still, up to one bit; else the impulse
+     * response integrated on pieces (so also where the interval is not narrow or reaches
+     * x = 0: the flux inlet's pulse at the inlet was 24 ULP off, 1.3 times max(16, 2κ), from
+     * complements that cancel 8-fold). Integrating on pieces wherever the complements cancel
+     * more than 2-fold made the pulse benchmark about 70 % slower.
      */
     private double afterFront(double x, double t1, double t) {
         final double before = response.complement(x, t1);
@@ -290,9 +294,9 @@ abstract class InletSolution extends AbstractSolution1D {
 
     /**
      * The flux-averaged concentration c − (D/v)·∂c/∂x of a pulse input after its end, v &gt; 0.
-     * Behind the pulse's peak ∂c/∂x &gt; 0 and the two terms cancel: at a tail 100 times below
-     * the pulse, their difference was 12.8 times outside max(16, 2κ) ULP, because each term
-     * carries the error of the exponent e^{−μt/R} in full. There, if the terms cancel by more
+     * Behind the pulse's peak ∂c/∂x &gt; 0 and the two terms cancel: where the result was 70
+     * times smaller than c, their difference was 12.8 times outside max(16, 2κ) ULP, because
+     * each term carries the error of the exponent e^{−μt/R} in full. There, if the terms cancel by more
      * than {@link #MAX_ROUTE_LOSS}, the flux-averaged impulse response is integrated over
      * [t − t₀, t] instead (on pieces; not at x = 0, where the first-type impulse response is
      * 0 and the pieces' test is blind).
