@@ -293,31 +293,44 @@ abstract class InletSolution extends AbstractSolution1D {
     }
 
     /**
-     * The flux-averaged concentration c − (D/v)·∂c/∂x of a pulse input after its end, v &gt; 0.
-     * Behind the pulse's peak ∂c/∂x &gt; 0 and the two terms cancel: where the result was 70
-     * times smaller than c, their difference was 12.8 times outside max(16, 2κ) ULP, because
-     * each term carries the error of the exponent e^{−μt/R} in full. There, if the terms cancel by more
-     * than {@link #MAX_ROUTE_LOSS}, the flux-averaged impulse response is integrated over
-     * [t − t₀, t] instead (on pieces; not at x = 0, where the first-type impulse response is
-     * 0 and the pieces' test is blind).
+     * The flux-averaged concentration c − (D/v)·∂c/∂x for v &gt; 0, formed for the input's
+     * part and the initial concentration's part separately: with Cᵢ near the input's level
+     * the two parts' gradients nearly cancel, and the difference of the totals was 1.14
+     * times outside max(16, 2κ) ULP. The initial part is Cᵢ·e^{−μt/R}·(1 − R₀ minus D/v
+     * times its gradient); the input's part is the plain difference except for a pulse after
+     * its end, where behind the pulse's peak ∂c/∂x &gt; 0 and the two terms cancel (where the
+     * result was 70 times smaller than c, the difference was 12.8 times outside
+     * max(16, 2κ) ULP, each term carrying the error of the exponent e^{−μt/R} in full).
+     * There, if they cancel by more than {@link #MAX_ROUTE_LOSS}, the flux-averaged impulse
+     * response is integrated over [t − t₀, t] instead (on pieces; not at x = 0, where the
+     * first-type impulse response is 0 and the pieces' test is blind).
      */
-    final double pulseFluxAveraged(double x, double t) {
-        final double c = value(x, t);
-        final double cx = gradient(x, t);
+    final double fluxAveragedWithFlow(double x, double t) {
         final double ratio = dispersion / velocity;
-        final double difference = c - ratio * cx;
-        final double t1 = t - input.duration();
-        if (!(t1 > 0) || level == 0 || x == 0
-            || Math.abs(c) + ratio * Math.abs(cx) <= MAX_ROUTE_LOSS * Math.abs(difference)) {
-            return difference;
+        if (!(x >= 0 && x < Double.POSITIVE_INFINITY && t > 0 && t < Double.POSITIVE_INFINITY)) {
+            // t = 0 or invalid input: validated and answered by value and gradient
+            return value(x, t) - ratio * gradient(x, t);
         }
-        final double fromInput = level * integrateAdaptive(x, t1, t, FLUX_AVERAGED, 0);
+        final double fromInput = level == 0 ? 0.0 : level * inputFluxAveraged(x, t, ratio);
         if (initial == 0) {
             return fromInput;
         }
-        // Cᵢ·e^{−μt/R}·(1 − R₀ minus D/v times its gradient), as in value and gradient
         return fromInput + initial * Math.exp(decayExponent(t))
             * (response.flush(x, t) - ratio * response.flushGradient(x, t));
+    }
+
+    /** The input's unit part of {@link #fluxAveragedWithFlow}. */
+    private double inputFluxAveraged(double x, double t, double ratio) {
+        final double c = inputResponse(x, t, kind == InletInput.Kind.PULSE ? Double.NaN
+            : Spread.inverseLength(dispersion, retardation, t));
+        final double cx = inputResponseGradient(x, t);
+        final double difference = c - ratio * cx;
+        if (kind != InletInput.Kind.PULSE || x == 0
+            || Math.abs(c) + ratio * Math.abs(cx) <= MAX_ROUTE_LOSS * Math.abs(difference)) {
+            return difference;
+        }
+        final double t1 = t - input.duration();
+        return t1 > 0 ? integrateAdaptive(x, t1, t, FLUX_AVERAGED, 0) : difference;
     }
 
     /** R(t) − R(t − t₀) of this inlet's unit response (a pulse input only). */
