@@ -1,6 +1,8 @@
 package org.advecta.solution;
 
+import org.advecta.internal.CentredErfSeries;
 import org.advecta.internal.Checks;
+import org.advecta.internal.ScaledErfDifference;
 import org.advecta.internal.ScaledExp;
 import org.advecta.internal.Spread;
 import org.advecta.special.ErrorFunctions;
@@ -16,12 +18,15 @@ import org.advecta.transport.TransportParameters;
  *                                                            h = (b − a)/(2L)
  * </pre>
  *
- * <p>The box convolved with the free-space kernel (Crank 1975, eq. 2.15 (number recalled), in the moving
- * coordinate). The difference of erf values is formed from the centre m and half-width h
- * ({@link ErrorFunctions#erfDifferenceCentred(double, double, double)}, which also applies
- * the decay), so it does not cancel in the tails (both erf near ±1) nor for a thin slug
- * (b − a ≪ L). The gradient uses
- * exp(−α²) − exp(−β²) = exp(−β²)·expm1(β² − α²) with β² − α² = −4mh computed from m and h.
+ * <p>The box convolved with the free-space kernel (Crank 1975, eq. 2.15 (number recalled), in
+ * the moving coordinate). For a slug up to a spread wide the difference of erf values is
+ * formed from the centre m and half-width h ({@link ErrorFunctions#erfDifferenceCentred(double,
+ * double, double)}, which also applies the decay), so it does not cancel for a thin slug
+ * (b − a ≪ L); for a wider one, from the ends' arguments (x − vt/R − a)/L and
+ * (x − vt/R − b)/L themselves, since m ± h would carry the rounding of m and h, each of the
+ * slug's width in spreads. Either way it does not cancel in the tails (both erf near ±1). The
+ * gradient uses exp(−α²) − exp(−β²) = exp(−β²)·expm1(β² − α²) with β² − α² = −4mh computed
+ * from m and h, and β from its end where the slug is wide.
  *
  * <p>At t = 0 the value is C₀ inside, 0 outside, C₀/2 at a and b; the gradient is 0 except
  * ±∞ at a and b (0 if C₀ = 0).
@@ -104,8 +109,24 @@ public final class InitialSlug extends AbstractSolution1D {
     private double value(double x, double t, double inverseLength) {
         final double m = (x - Math.fma(drift, t, middle)) * inverseLength;
         final double h = halfWidth * inverseLength;
-        // the decay joins the difference's own exponential where its series serves
-        return c0 * (0.5 * ErrorFunctions.erfDifferenceCentred(m, h, decayExponent(t)));
+        if (h <= CentredErfSeries.MAX_HALF_WIDTH
+            && Math.abs(m) * h <= CentredErfSeries.MAX_CENTRE_TIMES_HALF_WIDTH) {
+            // the decay joins the difference's own exponential where its series serves
+            return c0 * (0.5 * ErrorFunctions.erfDifferenceCentred(m, h, decayExponent(t)));
+        }
+        // a wide slug: the ends' arguments from x − a and x − b themselves, since m ± h
+        // would carry the rounding of m and h, each of size the slug's width in units of L
+        return c0 * (0.5 * ScaledErfDifference.value(edge(x, t, b, inverseLength),
+            edge(x, t, a, inverseLength), decayExponent(t)));
+    }
+
+    /**
+     * (x − vt/R − end)/L, with x − vt/R rounded once (fma) before the end is subtracted: were
+     * vt/R + end rounded first, a drift far beyond the slug's ends would leave its rounding in
+     * each end's argument (an end of 4e-4 beside vt/R = 1 gave 16 times max(16, 2κ) ULP).
+     */
+    private double edge(double x, double t, double end, double inverseLength) {
+        return (Math.fma(-drift, t, x) - end) * inverseLength;
     }
 
     @Override
@@ -117,11 +138,17 @@ public final class InitialSlug extends AbstractSolution1D {
         final double decay = decayExponent(t);
         // ∂c/∂x = C₀ e^{−μt/R}/(L√π) · [exp(−α²) − exp(−β²)],  α = m + h, β = m − h;
         // factor out the larger of the two exponentials: α² − β² = 4mh.
+        // the exponent's argument from its own end (x − b or x − a), not from m ∓ h, whose
+        // roundings are of the slug's width (1.5 times outside max(16, 2κ) ULP for a slug 90
+        // spreads wide)
+        final boolean wide = h > CentredErfSeries.MAX_HALF_WIDTH;
         final double diff;
         if (m >= 0) {
-            diff = ScaledExp.value(scale * Math.expm1(-4 * m * h), decay, m - h);
+            diff = ScaledExp.value(scale * Math.expm1(-4 * m * h), decay,
+                wide ? edge(x, t, b, s.inverseLength()) : m - h);
         } else {
-            diff = ScaledExp.value(-scale * Math.expm1(4 * m * h), decay, m + h);
+            diff = ScaledExp.value(-scale * Math.expm1(4 * m * h), decay,
+                wide ? edge(x, t, a, s.inverseLength()) : m + h);
         }
         return c0 * diff;
     }

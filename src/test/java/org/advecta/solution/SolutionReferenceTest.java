@@ -39,15 +39,18 @@ class SolutionReferenceTest {
      * gen_solutions.py): the flux-inlet pulse after its end under strong decay, near the
      * inlet, where the pulse gradient takes its last routes (a property try found it off by
      * 2e-10 relative there, and a wider grid up to 1135 times max(16, 2κ) at μ up to 1000),
-     * and both inlets' pulses at random points over wide ranges (up to 12.8 times, before
-     * the routes these files now hold to the contract).
+     * both inlets' pulses at random points over wide ranges (up to 12.8 times, before the
+     * routes these files now hold to the contract), and wide slugs (up to 2.4 times, before
+     * each end's argument came from its own end).
      */
     private static final Map<String, String> GENERATORS =
         Map.of("third_type_pulse_decay.csv", "gen_pulse_decay.py",
-            "first_type_pulse_wide.csv", "gen_pulse_decay.py");
+            "first_type_pulse_wide.csv", "gen_pulse_decay.py",
+            "initial_slug_wide.csv", "gen_slug_wide.py");
 
     static Stream<String> files() {
-        return Stream.of("initial_step.csv", "initial_slug.csv", "initial_gaussian.csv",
+        return Stream.of("initial_step.csv", "initial_slug.csv", "initial_slug_wide.csv",
+            "initial_gaussian.csv",
             "first_type_inlet.csv", "third_type_inlet.csv", "third_type_pulse_decay.csv",
             "first_type_pulse_wide.csv");
     }
@@ -101,6 +104,7 @@ class SolutionReferenceTest {
                 return InitialStep.of(p, r.getDouble("x0"), r.getDouble("c0"),
                     "left".equals(r.get("side")) ? InitialStep.Side.LEFT : InitialStep.Side.RIGHT);
             case "initial_slug.csv":
+            case "initial_slug_wide.csv":
                 return InitialSlug.of(p, r.getDouble("a"), r.getDouble("b"), r.getDouble("c0"));
             case "initial_gaussian.csv":
                 return InitialGaussian.of(p, r.getDouble("xc"), r.getDouble("s0"),
