@@ -25,7 +25,11 @@ public final class ScaledErfDifference {
     }
 
     /**
-     * Returns e^s·(erf(hi) − erf(lo)).
+     * Returns e^s·(erf(hi) − erf(lo)), for intervals with hi − lo ≥ 1 or |hi² − lo²| ≥ 4:
+     * there the tails' two terms differ by a factor e² at least, so that their difference
+     * loses under one bit (a narrower interval cancels in this form; the centred series of
+     * ErrorFunctions.erfDifferenceCentred is made for it, and InitialSlug takes this form only
+     * outside that series' range, h &gt; 1/2 or |m|·h &gt; 1).
      *
      * @param lo the lower end
      * @param hi the upper end, ≥ lo
