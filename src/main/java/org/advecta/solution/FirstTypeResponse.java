@@ -219,7 +219,15 @@ final class FirstTypeResponse implements UnitResponse {
 
     @Override
     public double density(double x, double t) {
-        // ∂F/∂t = x/(t√π L)·exp(−μt/R − A_v²): the first-passage density (Duhamel)
+        return firstPassageDensity(x, t, d, r, vR, muR);
+    }
+
+    /**
+     * ∂F/∂t = x/(t√π L)·exp(−μt/R − A_v²), the first-passage density (Duhamel): this inlet's
+     * impulse response, and the flux inlet's flux-averaged one.
+     */
+    static double firstPassageDensity(double x, double t, double d, double r, double vR,
+                                      double muR) {
         final Spread s = Spread.ofInverseLength(d, r, t);
         final double av = s.scaled(x - vR * t);
         return ScaledExp.value(s.scaled(x) / (t * SQRT_PI), -muR * t, av);

@@ -354,13 +354,9 @@ final class ThirdTypeResponse implements UnitResponse {
     @Override
     public double fluxAveragedDensity(double x, double t) {
         // the flux-averaged response of this inlet is the first-type one (Parker & van
-        // Genuchten 1984), whose impulse response is x/(t√π L)·e^{−μt/R − A_v²}
-        final Spread s = Spread.ofInverseLength(d, r, t);
-        return ScaledExp.value(s.scaled(x) / (t * SQRT_PI), -muR * t, s.scaled(x - vR * t));
+        // Genuchten 1984)
+        return FirstTypeResponse.firstPassageDensity(x, t, d, r, vR, muR);
     }
-
-    /** √π. */
-    private static final double SQRT_PI = Math.sqrt(Math.PI);
 
     @Override
     public double flush(double x, double t) {
