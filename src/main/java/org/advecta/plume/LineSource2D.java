@@ -487,11 +487,13 @@ public final class LineSource2D {
             value = scale * quadrature.value();
             // quadrature, tails and ends, plus the rounding of the exponent s − A², whose terms
             // are formed from rounded inputs (relative 8·2⁻⁵³ per unit of |s| + A², as κ says)
-            // (and, beside an absorbing wall, of c, γ and the factor: 8·2⁻⁵³ more)
+            // (and, beside an absorbing wall, of c, γ and the factor: 8·2⁻⁵³ more); the
+            // relative factor is formed first, since |value|·2⁻⁵³ alone is 0 for a value below
+            // MIN_NORMAL (and coarse below 2⁻⁹⁶⁹) where the whole term is hundreds of MIN_VALUE
             error = value == 0 ? scale * (quadrature.error() + tail + ends)
                 : scale * (quadrature.error() + tail + ends)
-                    + Math.abs(value) * ROUNDING * ((absorbing ? 24 : 16)
-                        + 8 * (Math.abs(s) + shift * shift));
+                    + Math.abs(value) * (ROUNDING * ((absorbing ? 24 : 16)
+                        + 8 * (Math.abs(s) + shift * shift)));
         }
     }
 }

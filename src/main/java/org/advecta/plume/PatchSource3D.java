@@ -557,8 +557,8 @@ public final class PatchSource3D {
             // (α + β)|w| cancel near the peak, where |w| ~ √(CUT/(α + β))
             error = value == 0 ? scale * (quadrature.error() + tail + ends)
                 : scale * (quadrature.error() + tail + ends) + Math.abs(value)
-                    * LineSource2D.ROUNDING * (16 + 8 * (xi * xi - shift)
-                        + 8 * Math.sqrt(CUT * (alpha + beta)) + 16 * kappa);
+                    * (LineSource2D.ROUNDING * (16 + 8 * (xi * xi - shift)
+                        + 8 * Math.sqrt(CUT * (alpha + beta)) + 16 * kappa));
         }
     }
 }

@@ -312,9 +312,9 @@ final class WallFlux {
             // the upper limit ln(Ut/(Rr)) is rounded (a few ulps of 1 + |w|): at a sharp front
             // (high Péclet) the integrand there is large, so its shift counts
             final double limit = hi == wEnd && hi < Double.POSITIVE_INFINITY
-                ? Math.abs(at(hi)) * ROUNDING * 8 * (1 + Math.abs(hi)) : 0.0;
+                ? Math.abs(at(hi)) * (ROUNDING * 8 * (1 + Math.abs(hi))) : 0.0;
             error = scale * (quadrature.error() + tail + limit) + (size == 0 ? 0.0
-                : size * ROUNDING * (64 + 8 * (Math.abs(s) + Math.abs(logP) + shift * shift)));
+                : size * (ROUNDING * (64 + 8 * (Math.abs(s) + Math.abs(logP) + shift * shift))));
         }
     }
 }

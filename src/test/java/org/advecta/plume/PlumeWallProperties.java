@@ -3,6 +3,7 @@ package org.advecta.plume;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
@@ -53,18 +54,34 @@ class PlumeWallProperties {
             @ForAll @DoubleRange(min = -3, max = 8) double x,
             @ForAll @DoubleRange(min = -2, max = 3) double logT,
             @ForAll boolean pulse) {
-        final TransportParameters p = params(v, logDL, anisotropy, r, mu);
         final double wall = -distance;
-        final double y = wall + Math.pow(10, logOffset) * distance;
-        final double t = Math.pow(10, logT);
+        checkNearTheWall(params(v, logDL, anisotropy, r, mu), wall,
+            wall + Math.pow(10, logOffset) * distance, x, Math.pow(10, logT), pulse);
+    }
+
+    /**
+     * A point that a try of {@link #nearTheWall} found when the sources' bounds formed
+     * |value|·2⁻⁵³ first: for free and image values near 1.8e−309 that product underflowed
+     * to 0, so both bounds were 0 while the exponent's rounding (A² ≈ 705) left them 88
+     * MIN_VALUE apart from the walled value; the bounds are now about 226 MIN_VALUE each.
+     */
+    @Example
+    void subnormalValuesKeepTheirRoundingBound() {
+        final double dl = Math.pow(10, -0.79);
+        final TransportParameters p = TransportParameters.of(0.99, dl)
+            .withDispersion(dl, 0.01 * dl, 0.01 * dl).withRetardation(1.08).withDecay(0.05);
+        checkNearTheWall(p, -0.1, -0.04988127663727278, 0.0, 489.77881936844614, true);
+    }
+
+    private static void checkNearTheWall(TransportParameters p, double wall, double y, double x,
+                                         double t, boolean pulse) {
         final LineSource2D free = LineSource2D.of(p, 0, 0, 1).withRateHistory(rates(pulse));
         final Estimate c = free.withWall(Wall.absorbing(Wall.Axis.Y, wall)).estimate(x, y, t);
         final Estimate f = free.estimate(x, y, t);
         // the image: the free source at the mirrored point (same kernel, Δy' = 2y_w − y − y₀)
         final Estimate g = free.estimate(x, 2 * wall - y, t);
-        final String where = " at v=" + v + " logDL=" + logDL + " aniso=" + anisotropy
-            + " R=" + r + " mu=" + mu + " wall=" + wall + " (x, y, t)=(" + x + ", " + y + ", "
-            + t + ") pulse=" + pulse + ": " + c + " free " + f + " image " + g;
+        final String where = " at " + p + " wall=" + wall + " (x, y, t)=(" + x + ", " + y
+            + ", " + t + ") pulse=" + pulse + ": " + c + " free " + f + " image " + g;
         assertTrue(c.value() >= 0, "non-negative" + where);
         assertTrue(c.value() <= f.value() + f.error() + c.error(), "at most the free value"
             + where);
