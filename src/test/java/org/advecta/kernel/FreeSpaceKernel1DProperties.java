@@ -3,6 +3,7 @@ package org.advecta.kernel;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
@@ -112,6 +113,12 @@ class FreeSpaceKernel1DProperties {
         assertEquals(direct, composed, 1e-12 * direct);
     }
 
+    /** The point a try found: v = μ = 0 at the inflection point, where every term is 0. */
+    @Example
+    void satisfiesTheEquationWhereEveryTermVanishes() {
+        satisfiesTheEquation(0.0, 0.0, 1.0, 0.0, 0.0, 1.0);
+    }
+
     @Property(tries = 200)
     void satisfiesTheEquation(@ForAll @DoubleRange(min = -10, max = 10) double v,
                               @ForAll @DoubleRange(min = -2, max = 1) double logD,
@@ -138,7 +145,12 @@ class FreeSpaceKernel1DProperties {
         final double residual = r * gt - d * gxx + v * gx + mu * c;
         final double scale = Math.abs(r * gt) + Math.abs(d * gxx) + Math.abs(v * gx)
             + Math.abs(mu * c);
-        assertEquals(0.0, residual, 1e-8 * scale);
+        // plus the differences' rounding, a few ε of the values over the step (|G_x| ≤
+        // (1 + |w|)|G|/σ): where every term vanishes (v = μ = 0 at the inflection points
+        // w = ±1, a try found this) the scale alone is rounding and would demand 0
+        final double noise = 1e-14 * Math.abs(c)
+            * (r / ht + d * (1 + Math.abs(w)) / (sigma(p, t) * hx));
+        assertEquals(0.0, residual, 1e-8 * scale + noise);
     }
 
     @Property(tries = 200)
